@@ -1,0 +1,91 @@
+import { Command, CommanderError, Option } from 'commander';
+import { InputError } from '../engine';
+import { backtestCommand } from './commands/backtest';
+import { demoCommand } from './commands/demo';
+import { forecastCommand } from './commands/forecast';
+import { scoreCommand } from './commands/score';
+import { trainCommand } from './commands/train';
+
+const MODELS = ['blend', 'neural', 'linear', 'naive-day', 'naive-week', 'weekday-rule'];
+
+/**
+ * The `spotloom` command line. Returns the exit code: 0 success, 2 bad
+ * input (one clear line on stderr, never a stack trace), 1 an internal fault.
+ */
+export async function main(argv: string[]): Promise<number> {
+  const program = new Command('spotloom')
+    .description('Day-ahead electricity price forecasts, baselines and error scores from a CSV file.')
+    .exitOverride()
+    .configureOutput({ writeErr: (s) => process.stderr.write(s) })
+    .showHelpAfterError('(spotloom --help lists the commands)');
+
+  const zone = () => new Option('--tz <zone>', 'market time zone (IANA)').default('Europe/Berlin');
+  const region = () => new Option('--region <code>', 'public-holiday region, e.g. DE or DE-BY (date-holidays codes)');
+  const seed = () => new Option('--seed <n>', 'random seed for training').default('1');
+
+  program.command('backtest')
+    .description('walk forward through a test span, forecasting each day from data before it')
+    .requiredOption('--input <file>', 'CSV with timestamp, price and driver columns')
+    .requiredOption('--test-start <date>', 'first delivery day to forecast (YYYY-MM-DD)')
+    .option('--test-end <date>', 'last delivery day to forecast (YYYY-MM-DD)')
+    .addOption(new Option('--model <name>', 'model').choices(MODELS).default('blend'))
+    .option('--retrain-every <days>', 'refresh the model every this many days (0 = never)')
+    .addOption(zone()).addOption(region()).addOption(seed())
+    .option('--out <file>', 'write timestamp,forecast,lower,upper,actual')
+    .option('--json', 'print one JSON summary on stdout')
+    .action(async (o) => backtestCommand(o));
+
+  program.command('train')
+    .description('train a model on the history and save it')
+    .requiredOption('--input <file>', 'CSV with timestamp, price and driver columns')
+    .option('--until <date>', 'train on delivery days before this date (YYYY-MM-DD)')
+    .requiredOption('--save <file>', 'model file to write (JSON)')
+    .addOption(new Option('--model <name>', 'model').choices(['blend', 'neural', 'linear']).default('blend'))
+    .addOption(zone()).addOption(region()).addOption(seed())
+    .option('--json', 'print one JSON summary on stdout')
+    .action(async (o) => trainCommand(o));
+
+  program.command('forecast')
+    .description('forecast the delivery day(s) after the last known price')
+    .requiredOption('--model <file>', 'model file saved by train')
+    .requiredOption('--input <file>', 'CSV: history with prices, then rows with drivers and an empty price')
+    .option('--out <file>', 'write timestamp,forecast,lower,upper')
+    .option('--json', 'print the forecast as JSON on stdout')
+    .action(async (o) => forecastCommand(o));
+
+  program.command('score')
+    .description('grade forecast columns against the actual prices')
+    .requiredOption('--input <file>', 'CSV with timestamp, actual and forecast columns')
+    .option('--against <column>', 'reference column for rMAE and the Diebold-Mariano test')
+    .option('--season <periods>', 'seasonal lag of the MASE scale in periods (default: one day)')
+    .addOption(zone())
+    .option('--json', 'print one JSON object on stdout')
+    .action(async (o) => scoreCommand(o));
+
+  program.command('demo')
+    .description('write the invented demo market and backtest the baselines on it')
+    .option('--out <dir>', 'folder for the demo files', 'spotloom-demo')
+    .action(async (o) => demoCommand(o));
+
+  try {
+    await program.parseAsync(argv, { from: 'user' });
+    return 0;
+  } catch (err) {
+    return report(err);
+  }
+}
+
+function report(err: unknown): number {
+  if (err instanceof CommanderError) {
+    // commander has already printed its message; help and version are not failures
+    return err.code === 'commander.helpDisplayed' || err.code === 'commander.version' || err.exitCode === 0 ? 0 : 2;
+  }
+  if (err instanceof InputError) {
+    process.stderr.write(`spotloom: ${err.message}\n`);
+    return 2;
+  }
+  const message = err instanceof Error ? err.message : String(err);
+  process.stderr.write(`spotloom: internal error: ${message}\n`);
+  if (process.env.SPOTLOOM_DEBUG && err instanceof Error) process.stderr.write(`${err.stack}\n`);
+  return 1;
+}

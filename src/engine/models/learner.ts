@@ -1,0 +1,288 @@
+import { InputError } from '../errors';
+import { historyNeeded, type FeatureSetup } from '../features/day-features';
+import type { FeatureGroup } from '../features/feature-groups';
+import { fromScaled } from '../features/level-scale';
+import { targetDay, type DayFrame } from '../series/day-frame';
+import { addResiduals, band, emptyPool, type ResidualPool } from './bands';
+import { LearnerSettingsSchema, RIDGE_LAMBDAS, type LearnerSettings } from './learner-settings';
+import type { DayAheadModel, DayForecast, Progress } from './model';
+import { loadNetwork, trainNetwork, type NetworkJson } from './network';
+import { addRidgeDay, predictRidge, ridgeGram, solveRidge, type Ridge } from './ridge';
+import { fitStandardiser, standardise, type Standardiser } from './standardiser';
+import { FeatureCache, type TrainingDay } from './training-days';
+
+/** What a fitted learner knows; model-file.ts stores exactly this. */
+export interface LearnerState {
+  setup: FeatureSetup;
+  notes: string[];
+  standardiser: Standardiser;
+  ridge: { lambda: number; weights: Float64Array };
+  networks: NetworkJson[];
+  /** affine map of scaled targets into the sigmoid's (0, 1): y01 = 0.1 + 0.8 (z − lo) / (hi − lo) */
+  targetRange: { lo: Float64Array; hi: Float64Array };
+  /** weight of the network ensemble in the blend (1 = neural only, 0 = linear only) */
+  neuralWeight: number;
+  residuals: ResidualPool;
+  validation: { days: number; mae: number; maeLinear: number; maeNeural: number; maeNaiveWeek: number };
+  trainedFrom: string;
+  trainedTo: string;
+  /** index of the first day not yet in the linear model's sums */
+  nextDay: number;
+}
+
+const MIN_TRAINING_DAYS = 56;
+
+/**
+ * The learned day-ahead model: a ridge model and an ensemble of brain.js
+ * networks on the same features, blended with a weight chosen on a
+ * chronological validation block at the end of the training span.
+ * `kind` neural or linear uses one part alone.
+ */
+export class Learner implements DayAheadModel {
+  readonly name: string;
+  readonly settings: LearnerSettings;
+  state?: LearnerState;
+  private cache?: FeatureCache;
+  private ridge?: Ridge;
+  private nets: ((x: Float64Array) => Float64Array)[] = [];
+  private readonly issued = new Map<number, { point: Float64Array; scale: number }>();
+
+  constructor(settings: LearnerSettings, state?: LearnerState) {
+    const checked = LearnerSettingsSchema.safeParse(settings);
+    if (!checked.success) throw new InputError(checked.error.issues.map((i) => i.message).join('; '));
+    this.settings = checked.data;
+    this.name = settings.kind;
+    if (state) this.adopt(state);
+  }
+
+  get minHistoryDays(): number {
+    return MIN_TRAINING_DAYS + this.settings.scaleWindow;
+  }
+
+  get defaultRetrainEvery(): number {
+    return this.settings.kind === 'linear' ? 1 : 7;
+  }
+
+  fit(view: DayFrame, progress?: Progress): void {
+    const s = this.settings;
+    const { setup, notes } = chooseSetup(view, s);
+    const cache = new FeatureCache(setup);
+    const days = cache.trainingDays(view, 0, view.price.length);
+    if (days.length < MIN_TRAINING_DAYS) {
+      throw new InputError(`training needs at least ${MIN_TRAINING_DAYS} usable days with prices after the first ${historyNeeded(setup)} days; found ${days.length}`);
+    }
+    const vDays = s.validationDays || Math.min(91, Math.max(21, Math.round(days.length * 0.2)));
+    const train = days.slice(0, days.length - vDays);
+    const val = days.slice(days.length - vDays);
+    const standardiser = fitStandardiser(train.map((d) => d.x));
+    const m = view.slots;
+    const actual = (d: TrainingDay) => view.price[d.day];
+    const priceOf = (d: TrainingDay, z: Float64Array) => z.map((v) => fromScaled(v, d.scale));
+    const maeOn = (preds: Float64Array[]) => meanAbs(val.map(actual), preds);
+
+    // linear part: penalty chosen on the validation block
+    const trainGram = ridgeGram(train.map((d) => d.x), train.map((d) => d.y!), standardiser);
+    let lambda = RIDGE_LAMBDAS[0], linVal: Float64Array[] = [], best = Infinity;
+    for (const l of RIDGE_LAMBDAS) {
+      const w = solveRidge(trainGram, l);
+      const preds = val.map((d) => priceOf(d, predictRidge(w, standardiser, d.x, m)));
+      const e = maeOn(preds);
+      if (e < best) { best = e; lambda = l; linVal = preds; }
+    }
+    progress?.(1, 1, 'linear model');
+
+    // neural part: an ensemble of seeds, early-stopped on validation MAE
+    const { lo, hi } = targetRange(train);
+    const toUnit = (z: Float64Array) => z.map((v, k) => 0.1 + (0.8 * (v - lo[k])) / (hi[k] - lo[k]));
+    const fromUnit = (u: Float64Array) => u.map((v, k) => lo[k] + ((v - 0.1) * (hi[k] - lo[k])) / 0.8);
+    const samples = train.map((d) => ({ input: standardise(d.x, standardiser), output: toUnit(d.y!) }));
+    const valInputs = val.map((d) => standardise(d.x, standardiser));
+    const networks: NetworkJson[] = [];
+    let nnVal: Float64Array[] = [];
+    if (s.kind !== 'linear') {
+      const sums = val.map(() => new Float64Array(m));
+      const total = s.network.ensemble * s.network.iterations;
+      for (let k = 0; k < s.network.ensemble; k++) {
+        const loss = (run: (x: Float64Array) => Float64Array) => maeOn(val.map((d, i) => priceOf(d, fromUnit(run(valInputs[i])))));
+        const { json } = trainNetwork(samples, s.network, s.seed * 101 + k, loss, (epoch) => progress?.(k * s.network.iterations + epoch, total, 'network epochs'));
+        networks.push(json);
+        const run = loadNetwork(json);
+        val.forEach((d, i) => { const z = fromUnit(run(valInputs[i])); for (let c = 0; c < m; c++) sums[i][c] += z[c]; });
+      }
+      nnVal = val.map((d, i) => priceOf(d, sums[i].map((v) => v / s.network.ensemble)));
+    }
+
+    // blend weight on the validation block
+    let neuralWeight = s.kind === 'neural' ? 1 : 0;
+    if (s.kind === 'blend') {
+      let bestBlend = Infinity;
+      for (let w = 0; w <= 1.0001; w += 0.05) {
+        const e = maeOn(mix(nnVal, linVal, w));
+        if (e < bestBlend - 1e-12) { bestBlend = e; neuralWeight = Math.round(w * 100) / 100; }
+      }
+    }
+    const combined = s.kind === 'linear' ? linVal : mix(nnVal, linVal, neuralWeight);
+    const residuals = emptyPool(m, Math.max(vDays, 91));
+    val.forEach((d, i) => addResiduals(residuals, actual(d), combined[i], d.scale.scale));
+
+    // refit the linear part on the whole span with the chosen penalty
+    const gram = ridgeGram(days.map((d) => d.x), days.map((d) => d.y!), standardiser);
+    const state: LearnerState = {
+      setup, notes, standardiser,
+      ridge: { lambda, weights: solveRidge(gram, lambda) },
+      networks, targetRange: { lo, hi }, neuralWeight, residuals,
+      validation: {
+        days: vDays, mae: maeOn(combined), maeLinear: maeOn(linVal), maeNeural: nnVal.length ? maeOn(nnVal) : NaN,
+        maeNaiveWeek: maeOn(val.map((d) => view.price[d.day - 7])),
+      },
+      trainedFrom: view.days[days[0].day].date,
+      trainedTo: view.days[view.price.length - 1].date,
+      nextDay: view.price.length,
+    };
+    this.adopt(state, cache, { standardiser, lambda, gram, weights: state.ridge.weights });
+  }
+
+  predict(view: DayFrame): DayForecast {
+    const state = this.fitted();
+    const d = targetDay(view);
+    for (const name of state.setup.drivers) {
+      if (!view.drivers[name]?.[d] || view.drivers[name][d].some(Number.isNaN)) {
+        throw new InputError(`cannot forecast ${view.days[d]?.date ?? 'the next day'}: driver "${name}" is missing for that day; add its forecast rows`);
+      }
+    }
+    const f = this.featureCache().features(view, d);
+    if (!f) throw new InputError(`cannot forecast ${view.days[d].date}: it needs ${historyNeeded(state.setup)} days of known prices before it`);
+    const point = this.pointForecast(f.x, f.scale);
+    this.recordIssued(view, d, point, f.scale.scale);
+    const { lower, upper } = band(state.residuals, point, f.scale.scale, this.settings.coverage);
+    return { point, lower, upper };
+  }
+
+  /** Takes in the days that became known since the last fit or update. */
+  update(view: DayFrame, progress?: Progress): void {
+    const state = this.fitted();
+    const cache = this.featureCache();
+    const fresh = cache.trainingDays(view, state.nextDay, view.price.length);
+    if (fresh.length === 0) return;
+    const ridge = this.linearSums(view);
+    for (const d of fresh) addRidgeDay(ridge, d.x, d.y!);
+    ridge.weights = solveRidge(ridge.gram, ridge.lambda);
+    state.ridge.weights = ridge.weights;
+    state.nextDay = view.price.length;
+    state.trainedTo = view.days[view.price.length - 1].date;
+    if (this.settings.kind !== 'linear' && this.settings.warmEpochs > 0) {
+      const all = cache.trainingDays(view, 0, view.price.length);
+      const { lo, hi } = state.targetRange;
+      const samples = all.map((d) => ({
+        input: standardise(d.x, state.standardiser),
+        output: d.y!.map((v, k) => Math.min(0.98, Math.max(0.02, 0.1 + (0.8 * (v - lo[k])) / (hi[k] - lo[k])))),
+      }));
+      const warm = { ...this.settings.network, iterations: this.settings.warmEpochs, checkEvery: this.settings.warmEpochs, patience: 1 };
+      state.networks = state.networks.map((json, k) =>
+        trainNetwork(samples, warm, this.settings.seed * 101 + k + state.nextDay * 7919, () => 0, undefined, json).json);
+      this.nets = state.networks.map(loadNetwork);
+      progress?.(1, 1, 'warm start');
+    }
+  }
+
+  private pointForecast(x: Float64Array, scale: { centre: number; scale: number }): Float64Array {
+    const state = this.fitted();
+    const m = state.targetRange.lo.length;
+    const lin = predictRidge(state.ridge.weights, state.standardiser, x, m).map((z) => fromScaled(z, scale));
+    if (this.nets.length === 0) return lin;
+    const input = standardise(x, state.standardiser);
+    const { lo, hi } = state.targetRange;
+    const sum = new Float64Array(m);
+    for (const run of this.nets) {
+      const u = run(input);
+      for (let c = 0; c < m; c++) sum[c] += lo[c] + ((u[c] - 0.1) * (hi[c] - lo[c])) / 0.8;
+    }
+    const nn = sum.map((z) => fromScaled(z / this.nets.length, scale));
+    return mix([nn], [lin], state.neuralWeight)[0];
+  }
+
+  /** Errors of earlier forecasts whose prices are now known join the band pool. */
+  private recordIssued(view: DayFrame, d: number, point: Float64Array, scale: number): void {
+    const state = this.fitted();
+    for (const [day, f] of this.issued) {
+      if (day < view.price.length) {
+        addResiduals(state.residuals, view.price[day], f.point, f.scale);
+        this.issued.delete(day);
+      }
+    }
+    this.issued.set(d, { point, scale });
+  }
+
+  private linearSums(view: DayFrame): Ridge {
+    if (this.ridge) return this.ridge;
+    const state = this.fitted();
+    const days = this.featureCache().trainingDays(view, 0, state.nextDay);
+    const gram = ridgeGram(days.map((d) => d.x), days.map((d) => d.y!), state.standardiser);
+    this.ridge = { standardiser: state.standardiser, lambda: state.ridge.lambda, gram, weights: state.ridge.weights };
+    return this.ridge;
+  }
+
+  private featureCache(): FeatureCache {
+    this.cache ??= new FeatureCache(this.fitted().setup);
+    return this.cache;
+  }
+
+  private fitted(): LearnerState {
+    if (!this.state) throw new InputError(`model ${this.name} has not been trained yet`);
+    return this.state;
+  }
+
+  private adopt(state: LearnerState, cache?: FeatureCache, ridge?: Ridge): void {
+    this.state = state;
+    this.cache = cache;
+    this.ridge = ridge;
+    this.nets = this.settings.kind === 'linear' ? [] : state.networks.map(loadNetwork);
+    this.issued.clear();
+  }
+}
+
+function chooseSetup(view: DayFrame, s: LearnerSettings): { setup: FeatureSetup; notes: string[] } {
+  const notes: string[] = [];
+  const drivers = Object.keys(view.drivers);
+  let groups: FeatureGroup[] = [...s.groups];
+  const drop = (g: FeatureGroup, why: string) => {
+    if (groups.includes(g)) { groups = groups.filter((x) => x !== g); notes.push(`${g} left out: ${why}`); }
+  };
+  if (view.price.length < 364 + 365) drop('price_year_ago', 'less than two years of history');
+  if (!s.region) drop('holidays', 'no holiday region given');
+  if (drivers.length === 0) { drop('drivers_target', 'no driver columns'); drop('drivers_lagged', 'no driver columns'); drop('residual_load', 'no driver columns'); }
+  if (groups.length === 0) throw new InputError('no feature group is left to train on; switch on price lags or add driver columns');
+  const driverStats: FeatureSetup['driverStats'] = {};
+  for (const name of drivers) {
+    const values = view.drivers[name].slice(0, view.price.length).flatMap((r) => Array.from(r)).filter(Number.isFinite);
+    if (values.length === 0) throw new InputError(`driver "${name}" has no known value in the training span`);
+    const mean = values.reduce((a, b) => a + b, 0) / values.length;
+    const sd = Math.sqrt(values.reduce((a, b) => a + (b - mean) ** 2, 0) / values.length) || 1;
+    driverStats[name] = { mean, sd };
+  }
+  return { setup: { groups, drivers, driverStats, region: s.region, scaleWindow: s.scaleWindow, slots: view.slots }, notes };
+}
+
+function targetRange(days: TrainingDay[]): { lo: Float64Array; hi: Float64Array } {
+  const m = days[0].y!.length;
+  const lo = new Float64Array(m).fill(Infinity);
+  const hi = new Float64Array(m).fill(-Infinity);
+  for (const d of days) d.y!.forEach((v, k) => { lo[k] = Math.min(lo[k], v); hi[k] = Math.max(hi[k], v); });
+  for (let k = 0; k < m; k++) {
+    const pad = Math.max(0.25 * (hi[k] - lo[k]), 0.5);
+    lo[k] -= pad; hi[k] += pad;
+  }
+  return { lo, hi };
+}
+
+function mix(a: Float64Array[], b: Float64Array[], wa: number): Float64Array[] {
+  if (wa === 0 || a.length === 0) return b;
+  if (wa === 1) return a;
+  return a.map((row, i) => row.map((v, k) => wa * v + (1 - wa) * b[i][k]));
+}
+
+function meanAbs(actual: Float64Array[], forecast: Float64Array[]): number {
+  let sum = 0, n = 0;
+  actual.forEach((row, i) => row.forEach((v, k) => { const e = Math.abs(v - forecast[i][k]); if (Number.isFinite(e)) { sum += e; n++; } }));
+  return n ? sum / n : NaN;
+}

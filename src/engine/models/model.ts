@@ -1,0 +1,28 @@
+import type { DayFrame } from '../series/day-frame';
+
+/** A forecast of one delivery day on its clock slots (see day-matrix.ts). */
+export interface DayForecast {
+  point: Float64Array;
+  lower?: Float64Array;
+  upper?: Float64Array;
+}
+
+export interface Progress {
+  (done: number, total: number, what: string): void;
+}
+
+/**
+ * A day-ahead model. It is fitted on a view (frameBefore) and forecasts
+ * the view's target day: the day right after the view's last price row.
+ * `update` refreshes it on a later view during a backtest or in daily use.
+ */
+export interface DayAheadModel {
+  readonly name: string;
+  /** whole days of price history needed before the first forecast */
+  readonly minHistoryDays: number;
+  /** the refresh schedule used when --retrain-every is not given (days; 0 = never) */
+  readonly defaultRetrainEvery?: number;
+  fit(view: DayFrame, progress?: Progress): void;
+  predict(view: DayFrame): DayForecast;
+  update?(view: DayFrame, progress?: Progress): void;
+}

@@ -1,0 +1,21 @@
+import { InputError, type Where } from '../errors';
+
+const NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
+
+/**
+ * A cell's number: plain decimal with `.` as separator, optional exponent.
+ * An empty cell is unknown (NaN). Anything else, including "NaN" and
+ * "Infinity", is refused so that no number is ever computed from garbage.
+ *
+ * @example parseNumber('-12.5') // -12.5
+ */
+export function parseNumber(text: string, where?: Where): number {
+  const t = text.trim();
+  if (t === '') return NaN;
+  if (!NUMBER.test(t)) throw new InputError(`"${clip(t)}" is not a number (use . as decimal separator)`, where);
+  return Number(t);
+}
+
+function clip(t: string): string {
+  return t.length > 40 ? `${t.slice(0, 40)}…` : t;
+}

@@ -1,0 +1,78 @@
+import { DateTime } from 'luxon';
+import { describe, expect, it } from 'vitest';
+import { baselineModel, buildSeries, inputFrame, parseCsv, runBacktest, type Series } from '../../../src/engine';
+
+const ZONE = 'Europe/Berlin';
+
+// Hourly series spanning the EU spring change of 2025 (Directive 2000/84/EC).
+function series(days: number, price: (k: number) => number): Series {
+  const rows = ['timestamp,price'];
+  const t0 = Date.parse('2025-03-09T23:00:00Z'); // local 2025-03-10 00:00
+  for (let k = 0; k < days * 24 - 1; k++) rows.push(`${new Date(t0 + k * 3_600_000).toISOString()},${price(k)}`);
+  return buildSeries(parseCsv(rows.join('\n'), 's.csv'), { zone: ZONE }).series;
+}
+
+const wobble = (k: number) => 40 + 20 * Math.sin(k / 3.7) + (k % 11) - 0.37 * (k % 5);
+
+describe('runBacktest(model, frame, series, options)', () => {
+  it('naive-week MAE equals a hand computation by local clock time, across the spring change', () => {
+    const s = series(40, wobble);
+    const { rows, summary } = runBacktest(baselineModel('naive-week'), inputFrame(s), s, { testStart: '2025-04-01' });
+    // hand rule: the price at the same local wall time 7 days earlier; the wall
+    // time 02:00 skipped on 2025-03-30 is the mean of 01:00 and 03:00 that day.
+    const byWall = new Map<string, number>();
+    s.times.forEach((t, i) => byWall.set(DateTime.fromMillis(t, { zone: ZONE }).toFormat("yyyy-MM-dd'T'HH:mm"), s.price[i]));
+    let sum = 0, n = 0;
+    for (const r of rows) {
+      const wall = DateTime.fromMillis(r.time, { zone: ZONE });
+      const back = wall.minus({ days: 7 }).toFormat('yyyy-MM-dd');
+      const key = `${back}T${wall.toFormat('HH:mm')}`;
+      const lag = byWall.get(key) ?? (byWall.get(`${back}T01:00`)! + byWall.get(`${back}T03:00`)!) / 2;
+      expect(r.forecast).toBe(lag);
+      sum += Math.abs(r.actual - lag); n++;
+    }
+    expect(summary.mae).toBeCloseTo(sum / n, 9);
+    expect(summary.periods).toBe(n);
+    expect(summary.rmae).toBeCloseTo(1, 12);
+    expect(summary.days).toBe(9);
+  });
+
+  it('weekday-rule uses D-1 on Tuesday and D-7 on Monday', () => {
+    const s = series(30, (k) => k);
+    const { rows } = runBacktest(baselineModel('weekday-rule'), inputFrame(s), s, { testStart: '2025-03-31', testEnd: '2025-04-01' });
+    const monday = rows.filter((r) => r.day === rows[0].day);
+    const tuesday = rows.filter((r) => r.day !== rows[0].day);
+    expect(monday[5].actual - monday[5].forecast).toBe(7 * 24 - 1); // a week back, 23-hour day in between
+    expect(tuesday[5].actual - tuesday[5].forecast).toBe(24);
+  });
+
+  it('never lets a price at or after day D change a forecast for a day before D', () => {
+    const s = series(40, wobble);
+    const cut = s.times.findIndex((t) => t >= Date.parse('2025-04-10T00:00:00+02:00'));
+    const changed = { ...s, price: s.price.map((p, i) => (i >= cut ? p * 3 + 100 : p)) };
+    for (const kind of ['naive-day', 'naive-week', 'weekday-rule'] as const) {
+      const a = runBacktest(baselineModel(kind), inputFrame(s), s, { testStart: '2025-04-01' }).rows;
+      const b = runBacktest(baselineModel(kind), inputFrame(changed), changed, { testStart: '2025-04-01' }).rows;
+      const before = (r: { time: number }) => r.time < s.times[cut];
+      expect(b.filter(before).map((r) => r.forecast)).toEqual(a.filter(before).map((r) => r.forecast));
+    }
+  });
+
+  it('refuses a test start outside the data or without enough history', () => {
+    const s = series(20, wobble);
+    expect(() => runBacktest(baselineModel('naive-week'), inputFrame(s), s, { testStart: '2031-01-01' })).toThrow(/outside the data/);
+    expect(() => runBacktest(baselineModel('naive-week'), inputFrame(s), s, { testStart: '2025-03-12' })).toThrow(/needs at least 7/);
+    expect(() => runBacktest(baselineModel('naive-week'), inputFrame(s), s, { testStart: '2025-3-12' })).toThrow(/not a date/);
+  });
+
+  it('skips unknown actual prices in the scores but keeps their rows', () => {
+    const s = series(20, wobble);
+    const idx = s.times.findIndex((t) => t >= Date.parse('2025-03-25T12:00:00+01:00'));
+    s.price[idx] = NaN;
+    const { rows, summary } = runBacktest(baselineModel('naive-day'), inputFrame(s), s, { testStart: '2025-03-25', testEnd: '2025-03-25' });
+    expect(rows).toHaveLength(24);
+    const ok = rows.filter((r) => Number.isFinite(r.actual));
+    expect(ok).toHaveLength(23);
+    expect(summary.mae).toBeCloseTo(ok.reduce((a, r) => a + Math.abs(r.actual - r.forecast), 0) / 23, 12);
+  });
+});

@@ -1,0 +1,63 @@
+import { describe, expect, it } from 'vitest';
+import { buildSeries, describeIngest, InputError, parseCsv } from '../../../src/engine';
+
+const build = (text: string, target = 'price') => buildSeries(parseCsv(text, 'f.csv'), { zone: 'Europe/Berlin', target });
+
+describe('buildSeries(table, options)', () => {
+  it('reads timestamps, prices (negative and zero included) and drivers', () => {
+    const { series, report } = build('timestamp,price,wind\n2025-01-01T00:00:00+01:00,-5.5,3\n2025-01-01T01:00:00+01:00,0,\n');
+    expect(series.resolution).toBe(60);
+    expect(series.price).toEqual([-5.5, 0]);
+    expect(series.drivers.wind).toEqual([3, NaN]);
+    expect(series.times[0]).toBe(Date.parse('2024-12-31T23:00:00Z'));
+    expect(report.missingPrices).toBe(0);
+  });
+
+  it('turns missing rows into reported gaps of unknown values', () => {
+    const { series, report } = build('timestamp,price\n2025-01-01T00:00Z,1\n2025-01-01T01:00Z,2\n2025-01-01T04:00Z,5\n2025-01-01T05:00Z,6\n');
+    expect(series.price).toEqual([1, 2, NaN, NaN, 5, 6]);
+    expect(report.gaps).toEqual([{ from: Date.parse('2025-01-01T02:00Z'), periods: 2 }]);
+    expect(report.missingPrices).toBe(2);
+    expect(describeIngest(series, report).join('\n')).toMatch(/1 gaps, 2 periods with no row/);
+  });
+
+  it('sorts rows that are out of order and says so', () => {
+    const { series, report } = build('timestamp,price\n2025-01-01T01:00Z,2\n2025-01-01T00:00Z,1\n2025-01-01T02:00Z,3\n');
+    expect(series.price).toEqual([1, 2, 3]);
+    expect(report.outOfOrderRows).toBe(1);
+  });
+
+  it('does not count empty prices after the last known one as missing (they are forecast rows)', () => {
+    const { report } = build('timestamp,price,t\n2025-01-01T00:00Z,1,1\n2025-01-01T01:00Z,2,1\n2025-01-01T02:00Z,,1\n');
+    expect(report.missingPrices).toBe(0);
+  });
+
+  it('infers 15-minute resolution', () => {
+    const { series } = build('timestamp,price\n2025-01-01T00:00Z,1\n2025-01-01T00:15Z,2\n2025-01-01T00:30Z,3\n');
+    expect(series.resolution).toBe(15);
+  });
+
+  it.each([
+    ['text in price', 'timestamp,price\n2025-01-01T00:00Z,abc\n2025-01-01T01:00Z,1\n', /f\.csv: row 2, column "price": "abc" is not a number/],
+    ['duplicate timestamps', 'timestamp,price\n2025-01-01T00:00Z,1\n2025-01-01T00:00Z,2\n', /row 3, column "timestamp".*appears twice \(rows 2 and 3\)/],
+    ['no header', '2025-01-01T00:00Z,1\n', /header has no "timestamp" column/],
+    ['no price column', 'timestamp,cost\n2025-01-01T00:00Z,1\n', /header has no "price" column/],
+    ['a timestamp without offset', 'timestamp,price\n2025-01-01 00:00,1\n2025-01-01 01:00,1\n', /row 2, column "timestamp".*UTC offset/],
+    ['an impossible date', 'timestamp,price\n2025-02-30T00:00Z,1\n2025-03-01T01:00Z,1\n', /day 30 out of range/],
+    ['an empty file', '', /the file is empty/],
+    ['a header only', 'timestamp,price\n', /no data rows/],
+    ['a text driver column', 'timestamp,price,zone\n2025-01-01T00:00Z,1,north\n2025-01-01T01:00Z,1,north\n', /column "zone": "north" is not a number/],
+    ['a ragged row', 'timestamp,price\n2025-01-01T00:00Z,1,7\n', /row 2: has 3 cells but the header has 2/],
+    ['a 20-minute step', 'timestamp,price\n2025-01-01T00:00Z,1\n2025-01-01T00:20Z,1\n2025-01-01T00:40Z,1\n', /20 minutes apart/],
+    ['an off-grid period', 'timestamp,price\n2025-01-01T00:00Z,1\n2025-01-01T01:00Z,1\n2025-01-01T02:30Z,1\n', /row 4.*grid/],
+    ['Infinity', 'timestamp,price\n2025-01-01T00:00Z,Infinity\n2025-01-01T01:00Z,1\n', /"Infinity" is not a number/],
+    ['two columns of one name', 'timestamp,price,t,T\n2025-01-01T00:00Z,1,1,1\n', /names column "T" twice/],
+  ])('refuses %s with one clear line', (_what, text, message) => {
+    expect(() => build(text)).toThrow(InputError);
+    expect(() => build(text)).toThrow(message);
+  });
+
+  it('refuses an unknown time zone', () => {
+    expect(() => buildSeries(parseCsv('timestamp,price\n2025-01-01T00:00Z,1\n', 'f'), { zone: 'Mars/Olympus' })).toThrow(/IANA time zone/);
+  });
+});
