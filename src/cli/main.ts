@@ -5,6 +5,7 @@ import { demoCommand } from './commands/demo';
 import { forecastCommand } from './commands/forecast';
 import { scoreCommand } from './commands/score';
 import { trainCommand } from './commands/train';
+import { addModelFlags } from './model-flags';
 
 const MODELS = ['blend', 'neural', 'linear', 'naive-day', 'naive-week', 'weekday-rule'];
 
@@ -20,29 +21,26 @@ export async function main(argv: string[]): Promise<number> {
     .showHelpAfterError('(spotloom --help lists the commands)');
 
   const zone = () => new Option('--tz <zone>', 'market time zone (IANA)').default('Europe/Berlin');
-  const region = () => new Option('--region <code>', 'public-holiday region, e.g. DE or DE-BY (date-holidays codes)');
-  const seed = () => new Option('--seed <n>', 'random seed for training').default('1');
-
-  program.command('backtest')
+  addModelFlags(program.command('backtest')
     .description('walk forward through a test span, forecasting each day from data before it')
     .requiredOption('--input <file>', 'CSV with timestamp, price and driver columns')
     .requiredOption('--test-start <date>', 'first delivery day to forecast (YYYY-MM-DD)')
     .option('--test-end <date>', 'last delivery day to forecast (YYYY-MM-DD)')
     .addOption(new Option('--model <name>', 'model').choices(MODELS).default('blend'))
-    .option('--retrain-every <days>', 'refresh the model every this many days (0 = never)')
-    .addOption(zone()).addOption(region()).addOption(seed())
+    .option('--retrain-every <days>', 'refresh the model every this many days (0 = never; default 1 for linear, 7 for blend and neural)')
+    .addOption(zone())
     .option('--out <file>', 'write timestamp,forecast,lower,upper,actual')
-    .option('--json', 'print one JSON summary on stdout')
+    .option('--json', 'print one JSON summary on stdout'))
     .action(async (o) => backtestCommand(o));
 
-  program.command('train')
+  addModelFlags(program.command('train')
     .description('train a model on the history and save it')
     .requiredOption('--input <file>', 'CSV with timestamp, price and driver columns')
     .option('--until <date>', 'train on delivery days before this date (YYYY-MM-DD)')
     .requiredOption('--save <file>', 'model file to write (JSON)')
     .addOption(new Option('--model <name>', 'model').choices(['blend', 'neural', 'linear']).default('blend'))
-    .addOption(zone()).addOption(region()).addOption(seed())
-    .option('--json', 'print one JSON summary on stdout')
+    .addOption(zone())
+    .option('--json', 'print one JSON summary on stdout'))
     .action(async (o) => trainCommand(o));
 
   program.command('forecast')

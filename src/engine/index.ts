@@ -53,3 +53,9 @@ export * from './backtest/summarise';
 export * from './demo/markets';
 export * from './demo/generate-market';
 export * from './demo/to-csv';
+export * from './demo/market-spec';
+
+export * from './model-file/model-schema';
+export * from './model-file/save-model';
+export * from './model-file/load-model';
+export * from './models/forecast-ahead';

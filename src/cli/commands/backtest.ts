@@ -1,24 +1,22 @@
 import { createModel, formatTimestamp, inputFrame, runBacktest } from '../../engine';
 import { intOption, loadSeries } from '../load-input';
+import { modelOptions, type ModelFlags } from '../model-flags';
 import { stderrProgress } from '../progress';
 import { writeCsv } from '../write-csv';
 
-export interface BacktestFlags {
+export interface BacktestFlags extends ModelFlags {
   input: string;
   testStart: string;
   testEnd?: string;
   model: string;
   retrainEvery?: string;
   tz: string;
-  region?: string;
-  seed: string;
   out?: string;
   json?: boolean;
 }
 
 export async function backtestCommand(flags: BacktestFlags): Promise<void> {
-  const seed = intOption(flags.seed, '--seed', 0, 1);
-  const model = createModel(flags.model, { seed, region: flags.region });
+  const model = createModel(flags.model, modelOptions(flags));
   const retrainEvery = intOption(flags.retrainEvery, '--retrain-every', 0, model.defaultRetrainEvery ?? 0);
   const { series } = loadSeries(flags.input, flags.tz);
   const frame = inputFrame(series);

@@ -28,22 +28,26 @@ export function historyNeeded(setup: FeatureSetup): number {
   return Math.max(setup.groups.includes('price_year_ago') ? YEAR_LAG : 0, setup.groups.includes('price_changes') ? 8 : 7, setup.scaleWindow);
 }
 
-/** Names of the features, in vector order (for importance and the pane). */
+/** The features of each enabled group, in vector order (for importance and the pane). */
+export function featureLayout(setup: FeatureSetup): { group: FeatureGroup; names: string[] }[] {
+  const layout: { group: FeatureGroup; names: string[] }[] = [];
+  const add = (group: FeatureGroup, names: string[]) => { if (setup.groups.includes(group) && names.length) layout.push({ group, names }); };
+  const profile = (prefix: string) => Array.from({ length: HOURS }, (_, h) => `${prefix}_h${String(h).padStart(2, '0')}`);
+  add('price_lags', PRICE_LAGS.flatMap((lag) => profile(`price_d${lag}`)));
+  add('price_d1_stats', ['price_d1_mean', 'price_d1_min', 'price_d1_max']);
+  add('price_year_ago', profile('price_d364'));
+  add('price_changes', ['mean_change_d1_d2', 'mean_change_d1_d8']);
+  add('drivers_target', setup.drivers.flatMap((k) => profile(`${k}_d0`)));
+  add('drivers_lagged', setup.drivers.flatMap((k) => [...profile(`${k}_d1`), ...profile(`${k}_d7`)]));
+  add('residual_load', hasResidualLoad(setup) ? profile('residual_load_d0') : []);
+  add('weekday', Array.from({ length: 7 }, (_, w) => `weekday_${w + 1}`));
+  add('month', ['month_sin', 'month_cos']);
+  add('holidays', setup.region ? ['holiday_d0', 'bridge_d0', 'holiday_d1'] : []);
+  return layout;
+}
+
 export function featureNames(setup: FeatureSetup): string[] {
-  const names: string[] = [];
-  const profile = (prefix: string) => { for (let h = 0; h < HOURS; h++) names.push(`${prefix}_h${String(h).padStart(2, '0')}`); };
-  const g = new Set(setup.groups);
-  if (g.has('price_lags')) for (const lag of PRICE_LAGS) profile(`price_d${lag}`);
-  if (g.has('price_d1_stats')) names.push('price_d1_mean', 'price_d1_min', 'price_d1_max');
-  if (g.has('price_year_ago')) profile('price_d364');
-  if (g.has('price_changes')) names.push('mean_change_d1_d2', 'mean_change_d1_d8');
-  if (g.has('drivers_target')) for (const k of setup.drivers) profile(`${k}_d0`);
-  if (g.has('drivers_lagged')) for (const k of setup.drivers) { profile(`${k}_d1`); profile(`${k}_d7`); }
-  if (g.has('residual_load') && hasResidualLoad(setup)) profile('residual_load_d0');
-  if (g.has('weekday')) for (let w = 1; w <= 7; w++) names.push(`weekday_${w}`);
-  if (g.has('month')) names.push('month_sin', 'month_cos');
-  if (g.has('holidays') && setup.region) names.push('holiday_d0', 'bridge_d0', 'holiday_d1');
-  return names;
+  return featureLayout(setup).flatMap((g) => g.names);
 }
 
 /**

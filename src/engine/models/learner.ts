@@ -1,5 +1,6 @@
 import { InputError } from '../errors';
-import { historyNeeded, type FeatureSetup } from '../features/day-features';
+import seedrandom from 'seedrandom';
+import { featureLayout, historyNeeded, type FeatureSetup } from '../features/day-features';
 import type { FeatureGroup } from '../features/feature-groups';
 import { fromScaled } from '../features/level-scale';
 import { targetDay, type DayFrame } from '../series/day-frame';
@@ -24,10 +25,11 @@ export interface LearnerState {
   neuralWeight: number;
   residuals: ResidualPool;
   validation: { days: number; mae: number; maeLinear: number; maeNeural: number; maeNaiveWeek: number };
+  /** mean increase of validation MAE when a group's inputs are shuffled */
+  importance: { group: FeatureGroup; increase: number }[];
   trainedFrom: string;
+  /** last delivery day whose prices the model has learned from */
   trainedTo: string;
-  /** index of the first day not yet in the linear model's sums */
-  nextDay: number;
 }
 
 const MIN_TRAINING_DAYS = 56;
@@ -83,11 +85,12 @@ export class Learner implements DayAheadModel {
     // linear part: penalty chosen on the validation block
     const trainGram = ridgeGram(train.map((d) => d.x), train.map((d) => d.y!), standardiser);
     let lambda = RIDGE_LAMBDAS[0], linVal: Float64Array[] = [], best = Infinity;
+    let linearTrainOnly: Float64Array = new Float64Array(0);
     for (const l of RIDGE_LAMBDAS) {
       const w = solveRidge(trainGram, l);
       const preds = val.map((d) => priceOf(d, predictRidge(w, standardiser, d.x, m)));
       const e = maeOn(preds);
-      if (e < best) { best = e; lambda = l; linVal = preds; }
+      if (e < best) { best = e; lambda = l; linVal = preds; linearTrainOnly = w; }
     }
     progress?.(1, 1, 'linear model');
 
@@ -98,6 +101,7 @@ export class Learner implements DayAheadModel {
     const samples = train.map((d) => ({ input: standardise(d.x, standardiser), output: toUnit(d.y!) }));
     const valInputs = val.map((d) => standardise(d.x, standardiser));
     const networks: NetworkJson[] = [];
+    const valNets: ((x: Float64Array) => Float64Array)[] = [];
     let nnVal: Float64Array[] = [];
     if (s.kind !== 'linear') {
       const sums = val.map(() => new Float64Array(m));
@@ -107,6 +111,7 @@ export class Learner implements DayAheadModel {
         const { json } = trainNetwork(samples, s.network, s.seed * 101 + k, loss, (epoch) => progress?.(k * s.network.iterations + epoch, total, 'network epochs'));
         networks.push(json);
         const run = loadNetwork(json);
+        valNets.push(run);
         val.forEach((d, i) => { const z = fromUnit(run(valInputs[i])); for (let c = 0; c < m; c++) sums[i][c] += z[c]; });
       }
       nnVal = val.map((d, i) => priceOf(d, sums[i].map((v) => v / s.network.ensemble)));
@@ -122,6 +127,15 @@ export class Learner implements DayAheadModel {
       }
     }
     const combined = s.kind === 'linear' ? linVal : mix(nnVal, linVal, neuralWeight);
+    const importance = permutationImportance(setup, val, maeOn(combined), s.seed, (x, d) => {
+      const lin = priceOf(d, predictRidge(linearTrainOnly, standardiser, x, m));
+      if (networks.length === 0 || neuralWeight === 0) return lin;
+      const input = standardise(x, standardiser);
+      const sum = new Float64Array(m);
+      for (const run of valNets) { const z = fromUnit(run(input)); for (let c = 0; c < m; c++) sum[c] += z[c]; }
+      return mix([priceOf(d, sum.map((v) => v / valNets.length))], [lin], neuralWeight)[0];
+    }, (preds) => maeOn(preds));
+    progress?.(1, 1, 'feature importance');
     const residuals = emptyPool(m, Math.max(vDays, 91));
     val.forEach((d, i) => addResiduals(residuals, actual(d), combined[i], d.scale.scale));
 
@@ -135,9 +149,9 @@ export class Learner implements DayAheadModel {
         days: vDays, mae: maeOn(combined), maeLinear: maeOn(linVal), maeNeural: nnVal.length ? maeOn(nnVal) : NaN,
         maeNaiveWeek: maeOn(val.map((d) => view.price[d.day - 7])),
       },
+      importance,
       trainedFrom: view.days[days[0].day].date,
       trainedTo: view.days[view.price.length - 1].date,
-      nextDay: view.price.length,
     };
     this.adopt(state, cache, { standardiser, lambda, gram, weights: state.ridge.weights });
   }
@@ -162,13 +176,13 @@ export class Learner implements DayAheadModel {
   update(view: DayFrame, progress?: Progress): void {
     const state = this.fitted();
     const cache = this.featureCache();
-    const fresh = cache.trainingDays(view, state.nextDay, view.price.length);
-    if (fresh.length === 0) return;
-    const ridge = this.linearSums(view);
+    const from = firstDayAfter(view, state.trainedTo);
+    if (from >= view.price.length) return;
+    const fresh = cache.trainingDays(view, from, view.price.length);
+    const ridge = this.linearSums(view, from);
     for (const d of fresh) addRidgeDay(ridge, d.x, d.y!);
     ridge.weights = solveRidge(ridge.gram, ridge.lambda);
     state.ridge.weights = ridge.weights;
-    state.nextDay = view.price.length;
     state.trainedTo = view.days[view.price.length - 1].date;
     if (this.settings.kind !== 'linear' && this.settings.warmEpochs > 0) {
       const all = cache.trainingDays(view, 0, view.price.length);
@@ -179,7 +193,7 @@ export class Learner implements DayAheadModel {
       }));
       const warm = { ...this.settings.network, iterations: this.settings.warmEpochs, checkEvery: this.settings.warmEpochs, patience: 1 };
       state.networks = state.networks.map((json, k) =>
-        trainNetwork(samples, warm, this.settings.seed * 101 + k + state.nextDay * 7919, () => 0, undefined, json).json);
+        trainNetwork(samples, warm, this.settings.seed * 101 + k + view.price.length * 7919, () => 0, undefined, json).json);
       this.nets = state.networks.map(loadNetwork);
       progress?.(1, 1, 'warm start');
     }
@@ -213,10 +227,11 @@ export class Learner implements DayAheadModel {
     this.issued.set(d, { point, scale });
   }
 
-  private linearSums(view: DayFrame): Ridge {
+  /** The linear model's running sums; after loading a stored model they are rebuilt from the history. */
+  private linearSums(view: DayFrame, upTo: number): Ridge {
     if (this.ridge) return this.ridge;
     const state = this.fitted();
-    const days = this.featureCache().trainingDays(view, 0, state.nextDay);
+    const days = this.featureCache().trainingDays(view, 0, upTo);
     const gram = ridgeGram(days.map((d) => d.x), days.map((d) => d.y!), state.standardiser);
     this.ridge = { standardiser: state.standardiser, lambda: state.ridge.lambda, gram, weights: state.ridge.weights };
     return this.ridge;
@@ -239,6 +254,39 @@ export class Learner implements DayAheadModel {
     this.nets = this.settings.kind === 'linear' ? [] : state.networks.map(loadNetwork);
     this.issued.clear();
   }
+}
+
+/** Index of the first day of `view` after `date`. */
+function firstDayAfter(view: DayFrame, date: string): number {
+  const i = view.days.findIndex((d) => d.date > date);
+  return i < 0 ? view.days.length : i;
+}
+
+/**
+ * Permutation importance (Breiman 2001; Fisher, Rudin & Dominici 2019):
+ * each group's columns are shuffled together across the validation days
+ * and the rise in MAE is recorded. Seeded, so it repeats exactly.
+ */
+function permutationImportance(
+  setup: FeatureSetup, val: TrainingDay[], baseMae: number, seed: number,
+  predict: (x: Float64Array, d: TrainingDay) => Float64Array, score: (preds: Float64Array[]) => number,
+): { group: FeatureGroup; increase: number }[] {
+  const rng = seedrandom(`spotloom-importance-${seed}`);
+  const out: { group: FeatureGroup; increase: number }[] = [];
+  let start = 0;
+  for (const { group, names } of featureLayout(setup)) {
+    const cols = names.length;
+    const order = val.map((_, i) => i);
+    for (let i = order.length - 1; i > 0; i--) { const j = Math.floor(rng() * (i + 1)); [order[i], order[j]] = [order[j], order[i]]; }
+    const preds = val.map((d, i) => {
+      const x = Float64Array.from(d.x);
+      x.set(val[order[i]].x.subarray(start, start + cols), start);
+      return predict(x, d);
+    });
+    out.push({ group, increase: score(preds) - baseMae });
+    start += cols;
+  }
+  return out.sort((a, b) => b.increase - a.increase);
 }
 
 function chooseSetup(view: DayFrame, s: LearnerSettings): { setup: FeatureSetup; notes: string[] } {

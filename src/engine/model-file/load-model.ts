@@ -1,0 +1,81 @@
+import { InputError } from '../errors';
+import { featureNames } from '../features/day-features';
+import { Learner, type LearnerState } from '../models/learner';
+import type { NetworkJson } from '../models/network';
+import { decodeFloats } from './base64-floats';
+import { MAX_MODEL_BYTES, StoredModelSchema, type StoredModel } from './model-schema';
+
+/**
+ * Reads a stored model from untrusted text (a workbook or a file): size
+ * cap first, then JSON, then the schema, then every array's length against
+ * the shapes it claims. Anything that does not match is refused.
+ *
+ * @throws InputError naming what is wrong
+ */
+export function parseStoredModel(text: string, source = 'the model'): StoredModel {
+  if (typeof text !== 'string' || text.length === 0) throw new InputError(`${source} is empty`);
+  if (text.length > MAX_MODEL_BYTES) throw new InputError(`${source} is larger than the 2 MB limit for a model`);
+  let json: unknown;
+  try {
+    json = JSON.parse(text);
+  } catch {
+    throw new InputError(`${source} is not JSON`);
+  }
+  const checked = StoredModelSchema.safeParse(json);
+  if (!checked.success) {
+    const issue = checked.error.issues[0];
+    throw new InputError(`${source} is not a valid Spotloom model: ${issue.path.join('.') || 'top level'}: ${issue.message}`);
+  }
+  return checked.data;
+}
+
+/** A ready learner from a parsed stored model. */
+export function learnerFromStored(stored: StoredModel, source = 'the model'): Learner {
+  const bad = (what: string): never => { throw new InputError(`${source} is not a valid Spotloom model: ${what}`); };
+  const p = featureCount(stored);
+  const m = stored.setup.slots;
+  const floats = (text: string, bytes: 4 | 8, length: number, what: string) => {
+    const v = decodeFloats(text, bytes);
+    if (!v || v.length !== length) return bad(`${what} has the wrong size`);
+    if (!v.every(Number.isFinite)) return bad(`${what} holds a value that is not a finite number`);
+    return v;
+  };
+  if (stored.setup.drivers.length !== stored.setup.driverStats.length || stored.setup.driverStats.some((d, i) => d.name !== stored.setup.drivers[i])) {
+    bad('setup.driverStats does not match setup.drivers');
+  }
+  if (stored.residuals.bySlot.length !== m) bad('residuals has the wrong number of slots');
+  if (stored.settings.kind !== 'linear' && stored.networks.length === 0) bad(`a ${stored.settings.kind} model needs networks`);
+  const networks: NetworkJson[] = stored.networks.map((n, k) => {
+    if (n.sizes[0] !== p || n.sizes[n.sizes.length - 1] !== m) bad(`network ${k + 1} does not fit the features`);
+    if (n.weights.length !== n.sizes.length - 1 || n.biases.length !== n.sizes.length - 1) bad(`network ${k + 1} has the wrong number of layers`);
+    const layers: NetworkJson['layers'] = [{ weights: [], biases: [] }];
+    for (let l = 1; l < n.sizes.length; l++) {
+      const rows = n.sizes[l], cols = n.sizes[l - 1];
+      const w = floats(n.weights[l - 1], 4, rows * cols, `network ${k + 1} layer ${l} weights`);
+      const weights = Array.from({ length: rows }, (_, r) => Array.from(w.subarray(r * cols, (r + 1) * cols)));
+      layers.push({ weights, biases: Array.from(floats(n.biases[l - 1], 4, rows, `network ${k + 1} layer ${l} biases`)) });
+    }
+    return { sizes: [...n.sizes], layers };
+  });
+  const driverStats: LearnerState['setup']['driverStats'] = Object.create(null);
+  for (const d of stored.setup.driverStats) driverStats[d.name] = { mean: d.mean, sd: d.sd };
+  const state: LearnerState = {
+    setup: { ...stored.setup, driverStats },
+    notes: stored.notes,
+    standardiser: { mean: floats(stored.standardiser.mean, 8, p, 'standardiser.mean'), sd: floats(stored.standardiser.sd, 8, p, 'standardiser.sd') },
+    ridge: { lambda: stored.ridge.lambda, weights: floats(stored.ridge.weights, 8, (p + 1) * m, 'ridge.weights') },
+    networks,
+    targetRange: { lo: floats(stored.targetRange.lo, 8, m, 'targetRange.lo'), hi: floats(stored.targetRange.hi, 8, m, 'targetRange.hi') },
+    neuralWeight: stored.neuralWeight,
+    residuals: { keep: stored.residuals.keep, bySlot: stored.residuals.bySlot.map((r) => [...r]) },
+    validation: { ...stored.validation, maeNeural: stored.validation.maeNeural ?? NaN, maeNaiveWeek: stored.validation.maeNaiveWeek ?? NaN },
+    importance: stored.importance,
+    trainedFrom: stored.trainedFrom,
+    trainedTo: stored.trainedTo,
+  };
+  return new Learner(stored.settings, state);
+}
+
+function featureCount(stored: StoredModel): number {
+  return featureNames({ ...stored.setup, driverStats: {} }).length;
+}

@@ -1,0 +1,59 @@
+import { z } from 'zod';
+import { ALL_FEATURE_GROUPS, type FeatureGroup } from '../features/feature-groups';
+import { LearnerSettingsSchema } from '../models/learner-settings';
+import { BASE64 } from './base64-floats';
+
+/**
+ * The stored model, version 1: the one schema of a model saved in a
+ * workbook or a file. Its TypeScript type is inferred from it. Objects are
+ * strict (unknown keys are refused), names are short plain identifiers (so
+ * keys like `__proto__` cannot get in), numbers are finite, and float arrays
+ * are base64 text (base64-floats.ts) whose lengths are checked on load.
+ */
+export const MODEL_FORMAT = 'spotloom-model';
+export const MODEL_VERSION = 1;
+export const MAX_MODEL_BYTES = 2 * 1024 * 1024;
+
+const FORBIDDEN = new Set(['__proto__', 'constructor', 'prototype']);
+const Name = z.string().min(1).max(64).regex(/^[A-Za-z0-9_][A-Za-z0-9_ .-]*$/, 'names may hold letters, digits, _ . - and spaces')
+  .refine((s) => !FORBIDDEN.has(s), 'reserved name');
+const Floats = z.string().max(MAX_MODEL_BYTES).regex(BASE64, 'not base64 text');
+const Finite = z.number().finite();
+const Day = z.string().regex(/^\d{4}-\d{2}-\d{2}$/);
+
+export const StoredModelSchema = z.strictObject({
+  format: z.literal(MODEL_FORMAT),
+  version: z.literal(MODEL_VERSION),
+  name: Name,
+  createdAt: z.string().max(40).regex(/^\d{4}-\d{2}-\d{2}T[\d:.]+(Z|[+-]\d{2}:\d{2})$/),
+  zone: z.string().min(1).max(64).regex(/^[A-Za-z0-9_+\-/]+$/),
+  resolution: z.union([z.literal(15), z.literal(30), z.literal(60)]),
+  settings: LearnerSettingsSchema.strict(),
+  setup: z.strictObject({
+    groups: z.array(z.enum(ALL_FEATURE_GROUPS as [FeatureGroup, ...FeatureGroup[]])).max(ALL_FEATURE_GROUPS.length),
+    drivers: z.array(Name).max(32),
+    driverStats: z.array(z.strictObject({ name: Name, mean: Finite, sd: Finite.positive() })).max(32),
+    region: z.string().max(20).optional(),
+    scaleWindow: z.number().int().min(7).max(365),
+    slots: z.union([z.literal(24), z.literal(48), z.literal(96)]),
+  }),
+  notes: z.array(z.string().max(300)).max(20),
+  standardiser: z.strictObject({ mean: Floats, sd: Floats }),
+  ridge: z.strictObject({ lambda: Finite.positive(), weights: Floats }),
+  networks: z.array(z.strictObject({
+    sizes: z.array(z.number().int().min(1).max(4096)).min(3).max(6),
+    weights: z.array(Floats).max(6),
+    biases: z.array(Floats).max(6),
+  })).max(10),
+  targetRange: z.strictObject({ lo: Floats, hi: Floats }),
+  neuralWeight: Finite.min(0).max(1),
+  residuals: z.strictObject({ keep: z.number().int().min(1).max(1000), bySlot: z.array(z.array(Finite).max(1000)).max(96) }),
+  validation: z.strictObject({
+    days: z.number().int().min(0), mae: Finite, maeLinear: Finite, maeNeural: Finite.nullable(), maeNaiveWeek: Finite.nullable(),
+  }),
+  importance: z.array(z.strictObject({ group: z.enum(ALL_FEATURE_GROUPS as [FeatureGroup, ...FeatureGroup[]]), increase: Finite })).max(ALL_FEATURE_GROUPS.length),
+  trainedFrom: Day,
+  trainedTo: Day,
+});
+
+export type StoredModel = z.infer<typeof StoredModelSchema>;

@@ -1,0 +1,77 @@
+import { InputError } from '../errors';
+import { frameBefore } from '../series/day-frame';
+import { expandDay } from '../series/day-matrix';
+import { inputFrame } from '../series/input-frame';
+import { addDays } from '../calendar/weekday';
+import { dayStartUtc } from '../series/local-clock';
+import type { Series } from '../series/series';
+import type { DayAheadModel } from './model';
+
+export interface AheadRow {
+  time: number;
+  forecast: number;
+  lower: number;
+  upper: number;
+}
+
+/**
+ * Forecasts the delivery day right after the last known price, the daily
+ * case: history with prices, then the next day's rows with driver forecasts
+ * and an empty price. When driver rows for further days follow (a weekend
+ * ahead), those days are forecast too, each from the forecasts before it.
+ *
+ * @param drivers the driver columns the model needs (empty: none)
+ * @throws InputError when the next day's driver rows are missing
+ */
+export function forecastAhead(model: DayAheadModel, series: Series, drivers: string[]): { rows: AheadRow[]; days: string[] } {
+  const full = drivers.length === 0 ? withNextDay(series) : series;
+  const frame = inputFrame(full);
+  const first = frame.price.length;
+  if (first === 0) throw new InputError('there is no known price to forecast from');
+  const lastKnown = frame.days[first - 1].date;
+  if (first >= frame.days.length || !hasDrivers(frame.drivers, drivers, first, frame.days[first].count)) {
+    throw new InputError(
+      `the forecast for ${addDays(lastKnown, 1)} needs its rows: timestamps of that day with ${drivers.join(', ')} filled in and price left empty`,
+    );
+  }
+  const rows: AheadRow[] = [];
+  const days: string[] = [];
+  for (let d = first; d < frame.days.length; d++) {
+    if (d > first && !(drivers.length && hasDrivers(frame.drivers, drivers, d, frame.days[d].count))) break;
+    const f = model.predict(frameBefore(frame, d));
+    const day = frame.days[d];
+    const point = expandDay(day, f.point);
+    const lower = f.lower ? expandDay(day, f.lower) : undefined;
+    const upper = f.upper ? expandDay(day, f.upper) : undefined;
+    for (let j = 0; j < day.count; j++) {
+      rows.push({ time: full.times[day.start + j], forecast: point[j], lower: lower?.[j] ?? NaN, upper: upper?.[j] ?? NaN });
+    }
+    days.push(day.date);
+    frame.price.push(Float64Array.from(f.point));
+  }
+  return { rows, days };
+}
+
+function hasDrivers(drivers: Record<string, Float64Array[]>, names: string[], d: number, _count: number): boolean {
+  return names.every((n) => drivers[n]?.[d] && !drivers[n][d].every(Number.isNaN));
+}
+
+/** The series with empty rows for the local day after its last period's day (for models without drivers). */
+function withNextDay(series: Series): Series {
+  const step = series.resolution * 60_000;
+  let lastPrice = series.price.length - 1;
+  while (lastPrice >= 0 && Number.isNaN(series.price[lastPrice])) lastPrice--;
+  if (lastPrice < 0) return series;
+  const lastDate = new Date(series.times[lastPrice]);
+  // the local date of the last price: find it from the zone's day starts
+  let date = lastDate.toISOString().slice(0, 10);
+  while (dayStartUtc(addDays(date, 1), series.zone) <= series.times[lastPrice]) date = addDays(date, 1);
+  while (dayStartUtc(date, series.zone) > series.times[lastPrice]) date = addDays(date, -1);
+  const end = dayStartUtc(addDays(date, 2), series.zone);
+  const times = series.times.slice(0, lastPrice + 1);
+  for (let t = times[times.length - 1] + step; t < end; t += step) times.push(t);
+  const pad = <T extends number>(a: T[]) => [...a.slice(0, lastPrice + 1), ...new Array(times.length - lastPrice - 1).fill(NaN)];
+  const drivers: Record<string, number[]> = {};
+  for (const [k, v] of Object.entries(series.drivers)) drivers[k] = pad(v);
+  return { ...series, times, price: pad(series.price), drivers };
+}

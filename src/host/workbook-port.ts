@@ -1,0 +1,38 @@
+/**
+ * The small interface between Spotloom and a workbook. Two implementations:
+ * the Office.js one (office-workbook.ts) and an in-memory one
+ * (memory-workbook.ts) that the standalone preview and the tests use. The
+ * pane and the cell functions only ever talk to this interface.
+ *
+ * Addresses are A1 style, optionally with a sheet: `History!A2:C900`.
+ * Values are rows × columns; an empty cell is `null`.
+ */
+export type CellValue = string | number | boolean | null;
+
+export interface WorkbookPort {
+  readonly kind: 'office' | 'memory';
+  /** the workbook's date system: serial 0 is 1899-12-30 (1900) or 1904-01-01 (1904) */
+  dateSystem(): Promise<'1900' | '1904'>;
+  /** address (with sheet) of the current selection */
+  selectedAddress(): Promise<string>;
+  readRange(address: string): Promise<CellValue[][]>;
+  /** formulas of a range (a cell without a formula gives its value) */
+  readFormulas(address: string): Promise<CellValue[][]>;
+  /**
+   * Writes values; a string beginning with `=` is a formula. Do not call it
+   * directly: every write goes through writeWithConsent (safe-write.ts).
+   */
+  writeRange(address: string, values: CellValue[][]): Promise<void>;
+  listSheets(): Promise<string[]>;
+  /** adds the sheet when missing; never clears an existing one */
+  ensureSheet(name: string): Promise<void>;
+  /** stored model texts by model name, as saved in this workbook */
+  loadModels(): Promise<Record<string, string>>;
+  saveModel(name: string, text: string): Promise<void>;
+  deleteModel(name: string): Promise<void>;
+  /** a native line chart of the columns in `address` (first column: categories) */
+  addLineChart(sheet: string, address: string, title: string): Promise<void>;
+}
+
+/** Asks the user a yes/no question; the pane shows it as a dialog. */
+export type AskUser = (question: string) => Promise<boolean>;
