@@ -1,3 +1,4 @@
+import { InputError } from '../engine';
 /**
  * A1 addresses: `A1`, `B2:D40`, `History!A2:C900`, `'Price history'!A:A` is
  * not supported (whole columns need a size). Columns are letters A..XFD
@@ -57,10 +58,10 @@ export function columnName(index: number): string {
 
 function cell(text: string, address: string): { row: number; column: number } {
   const m = CELL.exec(text.trim());
-  if (!m) throw new Error(`"${address}" is not an A1 address such as History!A2:C900`);
+  if (!m) throw new InputError(`"${address}" is not an A1 address such as History!A2:C900`);
   let column = 0;
   for (const ch of m[1].toUpperCase()) column = column * 26 + (ch.charCodeAt(0) - 64);
   const row = Number(m[2]);
-  if (row < 1 || row > MAX_ROWS || column > MAX_COLUMNS) throw new Error(`"${address}" is outside the sheet`);
+  if (row < 1 || row > MAX_ROWS || column > MAX_COLUMNS) throw new InputError(`"${address}" is outside the sheet`);
   return { row: row - 1, column: column - 1 };
 }
