@@ -2,13 +2,15 @@
 // markets. Prints a table and, last, one JSON line. Not a test: numbers are
 // measured, not asserted.
 import {
-  buildSeries, createModel, DEMO_MARKET, generateMarket, inputFrame, parseCsv, runBacktest, SOLAR_MARKET, toCsv,
+  buildSeries, createModel, DEFAULT_NETWORK_OPTIONS, DEMO_MARKET, generateMarket, inputFrame, parseCsv, runBacktest, SOLAR_MARKET, toCsv,
   type MarketSpec,
 } from '../src/engine';
 
 const TEST_DAYS = Number(process.env.BENCH_TEST_DAYS ?? 91);
 const MODELS = (process.env.BENCH_MODELS ?? 'blend,neural,linear,weekday-rule,naive-week').split(',');
 const MARKETS = (process.env.BENCH_MARKETS ?? 'demo,solar').split(',');
+// e.g. BENCH_OPTIONS='{"network":{"hiddenLayers":[16]}}' to try other settings
+const OPTIONS = JSON.parse(process.env.BENCH_OPTIONS ?? '{}');
 
 interface Row {
   market: string; model: string; mae: number; rmae: number; smape: number; coverage: number | null;
@@ -22,7 +24,7 @@ function bench(spec: MarketSpec): Row[] {
   const testStart = frame.days[frame.days.length - TEST_DAYS].date;
   const rows: Row[] = [];
   for (const name of MODELS) {
-    const model = createModel(name, { seed: 1, region: spec.region });
+    const model = createModel(name, { seed: 1, region: spec.region, ...OPTIONS, network: { ...DEFAULT_NETWORK_OPTIONS, ...OPTIONS.network } });
     let trainSeconds = 0;
     const fit = model.fit.bind(model);
     model.fit = (view, progress) => { const t = Date.now(); fit(view, progress); trainSeconds = (Date.now() - t) / 1000; };

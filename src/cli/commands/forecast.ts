@@ -18,8 +18,8 @@ export async function forecastCommand(flags: ForecastFlags): Promise<void> {
   }
   const missing = stored.setup.drivers.filter((d) => !(d in series.drivers));
   if (missing.length) throw new InputError(`lacks the driver column "${missing[0]}" the model was trained with`, { file: flags.input });
-  const { rows, days } = forecastAhead(learner, series, stored.setup.drivers);
-  if (days.length > 1) process.stderr.write(`forecast: ${days.slice(1).join(', ')} use the forecasts of the days before them as their price history\n`);
+  const { rows, days, notes } = forecastAhead(learner, series, stored.setup.drivers);
+  for (const note of notes) process.stderr.write(`forecast: ${note}\n`);
   if (flags.out) {
     writeCsv(flags.out, ['timestamp', 'forecast', 'lower', 'upper'], rows.map((r) => [formatTimestamp(r.time, stored.zone), r.forecast, r.lower, r.upper]));
   }

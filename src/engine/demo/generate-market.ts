@@ -57,7 +57,6 @@ const TAU = 2 * Math.PI;
  * @example generateMarket(DEMO_MARKET, 1)[0].timestamp // '2024-06-01T00:00:00+02:00'
  */
 export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
-  const X = (globalThis as any).X ?? {};
   if (!Number.isFinite(seed)) throw new InputError(`demo seed must be a finite number, got ${seed}`);
   checkMarketSpec(spec);
   const random = seedrandom.alea(`spotloom-demo:${seed}`);
@@ -67,16 +66,16 @@ export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
 
   // ---- day-level states (one extra day so intraday values can glide into the next day)
   const n = days + 1;
-  const tempAnomaly = ar1(n, 0.6, climate.anomalyC, normal);
+  const tempAnomaly = ar1(n, 0.5, climate.anomalyC, normal);
   const windRegime = ar1(n, 0.65, 1, normal);
-  const cloud = ar1(n, 0.5, 1, normal);
-  const priceShock = ar1(n, 0.55, 0.06 * (X.shock ?? 1), normal);
-  const loadShock = ar1(n, 0.3, 0.025, normal);
+  const cloud = ar1(n, 0.75, 1, normal);
+  const priceShock = ar1(n, 0.55, 0.06, normal);
+  const loadShock = ar1(n, 0.2, 0.05, normal);
   const tempError = Array.from({ length: n }, () => climate.forecastErrorC * normal());
   const loadError = Array.from({ length: n }, () => load.forecastError * normal());
   const solarError = Array.from({ length: n }, () => 0.07 * normal());
   const windError = Array.from({ length: n }, () => 0.1 * normal());
-  const fuelCost = fuelPath(n, spec, normal).map((v) => (X.nofuel ? spec.fuel.start : v));
+  const fuelCost = fuelPath(n, spec, normal);
   const outage = outages(n, random);
   const spikes = Array.from({ length: n }, () =>
     random() < spec.spikesPerYear / 365
@@ -99,8 +98,8 @@ export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
     const count = periods.start.length;
     const season = Math.cos((TAU * (dayOfYear(date) - climate.warmestDay)) / 365.25);
     const winter = -season; // +1 on the coldest day of the year: windier
-    const clearness = 0.3 + 0.7 / (1 + Math.exp(-(1.4 * cloud[d] + 0.9 + 0.4 * season)));
-    const capacity = supply.capacityMW * (1 - (X.noout ? 0 : outage[d]));
+    const clearness = 0.4 + 0.6 / (1 + Math.exp(-(1.2 * cloud[d] + 0.9 + 0.4 * season)));
+    const capacity = supply.capacityMW * (1 - outage[d]);
     const spike = spikes[d];
 
     for (let k = 0; k < count; k++) {
@@ -125,18 +124,18 @@ export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
       // wind and solar
       const regime = (1 - f) * windRegime[d] + f * windRegime[d + 1];
       const windShare = 1 / (1 + Math.exp(-(1.3 * regime - 1.1 + 0.35 * winter + 0.15 * Math.cos((TAU * (h - 3)) / 24))));
-      const wind = (X.nowind ? 0 : 1) * supply.windMW * windShare;
+      const wind = supply.windMW * windShare;
       const windForecast = supply.windMW * clamp01(windShare * (1 + windError[d]) + 0.02 * normal());
       const sun = solarShare(t + (spec.resolution * 60_000) / 2, spec.latitude, spec.longitude);
-      const solar = (X.nosolar ? 0 : 1) * supply.solarMW * sun * clamp01(clearness * (1 + 0.06 * normal()));
+      const solar = supply.solarMW * sun * clamp01(clearness * (1 + 0.06 * normal()));
       const solarForecast = supply.solarMW * sun * clamp01(clearness * (1 + solarError[d]) + 0.02 * normal());
 
       // price
-      priceNoise = hourlyPhi(0.7) * priceNoise + Math.sqrt(1 - hourlyPhi(0.7) ** 2) * normal();
+      priceNoise = hourlyPhi(0.8) * priceNoise + Math.sqrt(1 - hourlyPhi(0.8) ** 2) * normal();
       const share = (trueLoad - wind - solar) / capacity;
       let price = meritOrderPrice(share, fuelCost[d]) * Math.exp(priceShock[d]);
-      price += (X.noise ?? 1) * priceNoise * (2.5 + 0.05 * Math.abs(price));
-      if (!X.nospike && spike && h >= spike.from && h < spike.from + spike.hours) price += spike.size * (Math.abs(price) + fuelCost[d]);
+      price += priceNoise * (1.5 + 0.035 * Math.abs(price));
+      if (spike && h >= spike.from && h < spike.from + spike.hours) price += spike.size * (Math.abs(price) + fuelCost[d]);
 
       const row: DemoRow = {
         timestamp: localTimestamp(date, periods.clock[k], periods.offset[k]),

@@ -27,13 +27,13 @@ export const DEMO_MARKET: MarketSpec = {
   climate: { meanC: 10, seasonC: 9.5, warmestDay: 200, dayNightC: 8, anomalyC: 4, forecastErrorC: 0.9 },
   load: {
     baseMW: 6000,
-    heatingMWPerC: 110,
+    heatingMWPerC: 130,
     heatingBelowC: 14,
-    coolingMWPerC: 60,
+    coolingMWPerC: 90,
     coolingAboveC: 22,
     forecastError: 0.015,
   },
-  supply: { capacityMW: 8200, windMW: 2400, solarMW: 2800 },
+  supply: { capacityMW: 9800, windMW: 1600, solarMW: 4200 },
   fuel: { start: 78, trendPerYear: 0.03, reversionPerDay: 0.01, volatilityPerDay: 0.018 },
   spikesPerYear: 14,
 };
@@ -72,7 +72,7 @@ export const SOLAR_MARKET: MarketSpec = {
     coolingAboveC: 23,
     forecastError: 0.02,
   },
-  supply: { capacityMW: 2500, windMW: 800, solarMW: 1500 },
+  supply: { capacityMW: 2500, windMW: 800, solarMW: 1350 },
   fuel: { start: 95, trendPerYear: 0.02, reversionPerDay: 0.012, volatilityPerDay: 0.02 },
   spikesPerYear: 18,
 };

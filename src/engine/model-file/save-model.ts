@@ -30,8 +30,8 @@ export function toStoredModel(learner: Learner, meta: { name: string; zone: stri
     },
     notes: state.notes,
     standardiser: { mean: f64(state.standardiser.mean), sd: f64(state.standardiser.sd) },
-    ridge: { lambda: state.ridge.lambda, weights: f64(state.ridge.weights) },
-    // brain.js keeps its weights as 32-bit floats, so 4 bytes store them exactly
+    ridge: { lambda: state.ridge.lambda, weights: encodeFloats(state.ridge.weights, 4) },
+    // ridge coefficients are 32-bit (solveRidge) and brain.js keeps 32-bit weights: 4 bytes store both exactly
     networks: state.networks.map((n) => ({
       sizes: n.sizes,
       weights: n.layers.slice(1).map((l) => encodeFloats(l.weights.flat(), 4)),

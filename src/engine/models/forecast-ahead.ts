@@ -23,12 +23,18 @@ export interface AheadRow {
  * @param drivers the driver columns the model needs (empty: none)
  * @throws InputError when the next day's driver rows are missing
  */
-export function forecastAhead(model: DayAheadModel, series: Series, drivers: string[]): { rows: AheadRow[]; days: string[] } {
+export function forecastAhead(model: DayAheadModel, series: Series, drivers: string[]): { rows: AheadRow[]; days: string[]; notes: string[] } {
   const full = drivers.length === 0 ? withNextDay(series) : series;
   const frame = inputFrame(full);
   const first = frame.price.length;
   if (first === 0) throw new InputError('there is no known price to forecast from');
   const lastKnown = frame.days[first - 1].date;
+  const notes: string[] = [];
+  const lastDay = frame.days[first - 1];
+  const known = full.price.slice(lastDay.start, lastDay.start + lastDay.count).filter((p) => !Number.isNaN(p)).length;
+  if (known < lastDay.expected) {
+    notes.push(`${lastKnown}, the last day with prices, has ${known} of ${lastDay.expected}; its other periods take the same period of the day before`);
+  }
   if (first >= frame.days.length || !hasDrivers(frame.drivers, drivers, first, frame.days[first].count)) {
     throw new InputError(
       `the forecast for ${addDays(lastKnown, 1)} needs its rows: timestamps of that day with ${drivers.join(', ')} filled in and price left empty`,
@@ -49,7 +55,8 @@ export function forecastAhead(model: DayAheadModel, series: Series, drivers: str
     days.push(day.date);
     frame.price.push(Float64Array.from(f.point));
   }
-  return { rows, days };
+  if (days.length > 1) notes.push(`${days.slice(1).join(', ')} use the forecasts of the days before them as their price history`);
+  return { rows, days, notes };
 }
 
 function hasDrivers(drivers: Record<string, Float64Array[]>, names: string[], d: number, _count: number): boolean {

@@ -38,10 +38,15 @@ export function trainNetwork(
   const rng = seedrandom(`spotloom-net-${seed}`);
   const net = new NeuralNetwork<number[], number[]>({ hiddenLayers: options.hiddenLayers });
   const data = samples.map((s) => ({ input: Array.from(s.input), output: Array.from(s.output) }));
-  const trainOpts = { learningRate: options.learningRate, momentum: options.momentum, errorThresh: 1e-12, log: false };
+  // brain.js refuses a momentum of exactly 0; the smallest double makes the term vanish all the same
+  const momentum = options.momentum === 0 ? Number.MIN_VALUE : options.momentum;
+  const trainOpts = { learningRate: options.learningRate, momentum, errorThresh: 1e-12, log: false };
   withRandom(rng, () => {
     if (start) net.fromJSON(toBrainJson(start) as never);
-    else net.train(data.slice(0, 1), { ...trainOpts, iterations: 1, learningRate: 1e-12 });
+    else {
+      net.sizes = [samples[0].input.length, ...options.hiddenLayers, samples[0].output.length];
+      net.initialize();
+    }
   });
   const predict = (x: Float64Array) => Float64Array.from(net.run(Array.from(x) as never) as ArrayLike<number>);
   let best = snapshot(net), bestLoss = validationLoss(predict), bestEpoch = 0, stale = 0, epoch = 0;

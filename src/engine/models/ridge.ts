@@ -41,7 +41,8 @@ export function solveRidge(g: Gram, lambda: number): Float64Array {
   a[(p - 1) * p + (p - 1)] += 1e-9 * g.rows;
   const w = choleskySolve(a, xty, p, m);
   if (!w) throw new InputError('the linear model could not be fitted: its inputs are degenerate (e.g. a constant price history)');
-  return w;
+  // 32-bit coefficients: far finer than any price, and the model file stores them exactly in half the space
+  return w.map(Math.fround);
 }
 
 export function addRidgeDay(r: Ridge, x: Float64Array, y: Float64Array): void {

@@ -1,0 +1,63 @@
+import { describe, expect, it } from 'vitest';
+import {
+  createModel, forecastAhead, inputFrame, Learner, learnerFromStored, parseStoredModel, storedModelText, toStoredModel,
+  type ModelOptions, type Series,
+} from '../../../src/engine';
+import { syntheticSeries } from '../../support/synthetic';
+
+const SMALL: ModelOptions = { seed: 2, network: { hiddenLayers: [5], learningRate: 0.05, momentum: 0.5, iterations: 10, ensemble: 2, checkEvery: 5, patience: 2 } };
+
+/** history with prices, then the last whole local day's rows with drivers and an empty price */
+function withOpenDay(s: Series): Series {
+  const open = s.times.findIndex((t) => t >= Date.parse('2025-05-04T00:00:00+02:00'));
+  const end = s.times.findIndex((t) => t >= Date.parse('2025-05-05T00:00:00+02:00'));
+  return { ...s, times: s.times.slice(0, end), price: s.price.slice(0, end).map((p, i) => (i >= open ? NaN : p)), drivers: { load_forecast: s.drivers.load_forecast.slice(0, end) } };
+}
+
+function trained(kind: 'blend' | 'linear') {
+  const series = withOpenDay(syntheticSeries(120));
+  const model = createModel(kind, SMALL) as Learner;
+  model.fit(inputFrame(series));
+  const text = storedModelText(toStoredModel(model, { name: `test ${kind}`, zone: series.zone, resolution: series.resolution, createdAt: '2026-12-01T08:00:00Z' }));
+  return { series, model, text };
+}
+
+describe('stored model: save → load → forecast', () => {
+  it.each(['blend', 'linear'] as const)('%s forecasts exactly the same after a round trip', (kind) => {
+    const { series, model, text } = trained(kind);
+    const before = forecastAhead(model, series, ['load_forecast']).rows;
+    const loaded = learnerFromStored(parseStoredModel(text));
+    const after = forecastAhead(loaded, series, ['load_forecast']).rows;
+    expect(after).toHaveLength(24);
+    expect(after).toEqual(before);
+    // and saving the loaded model gives the same text
+    expect(storedModelText(toStoredModel(loaded, { name: `test ${kind}`, zone: series.zone, resolution: series.resolution, createdAt: '2026-12-01T08:00:00Z' }))).toBe(text);
+  });
+});
+
+describe('parseStoredModel(text) refuses what does not match the schema', () => {
+  const { text } = trained('blend');
+  const good = JSON.parse(text);
+  const variant = (change: (m: any) => void) => { const m = structuredClone(good); change(m); return JSON.stringify(m); };
+  const nanWeights = 'AADAfw=='; // one float32 NaN (0x7fc00000), base64
+
+  it.each([
+    ['not JSON', '{', /not JSON/],
+    ['an empty text', '', /empty/],
+    ['a wrong format tag', variant((m) => { m.format = 'other'; }), /format/],
+    ['a newer version', variant((m) => { m.version = 2; }), /version/],
+    ['a missing field', variant((m) => { delete m.ridge; }), /ridge/],
+    ['a wrong type', variant((m) => { m.neuralWeight = 'half'; }), /neuralWeight/],
+    ['an unknown extra key', variant((m) => { m.extra = 1; }), /Unrecognized key|extra/],
+    ['a __proto__ key', text.replace('"format"', '"__proto__":{"polluted":true},"format"'), /__proto__|Unrecognized/],
+    ['a driver named __proto__', variant((m) => { m.setup.drivers = ['__proto__']; }), /reserved name|drivers/],
+    ['a weight array of the wrong size', variant((m) => { m.ridge.weights = 'AAAAAA=='; }), /ridge.weights has the wrong size/],
+    ['NaN network weights', variant((m) => { m.networks[0].biases[0] = nanWeights; }), /not a finite number|wrong size/],
+    ['a gigantic array', variant((m) => { m.residuals.bySlot = Array.from({ length: 24 }, () => new Array(5000).fill(0)); }), /residuals|2 MB/],
+    ['an over-size string', variant((m) => { m.notes = ['x'.repeat(5000)]; }), /notes/],
+    ['more than 2 MB', ' '.repeat(2 * 1024 * 1024 + 1), /2 MB/],
+  ])('refuses %s', (_what, bad, message) => {
+    expect(() => learnerFromStored(parseStoredModel(bad))).toThrow(message);
+    expect(({} as Record<string, unknown>).polluted).toBeUndefined();
+  });
+});
