@@ -38,7 +38,7 @@ const TAU = 2 * Math.PI;
  *   the actual temperature plus a small daily and hourly error;
  * - demand: a daily profile with morning and evening peaks on working days,
  *   lower Saturdays, lowest Sundays and public holidays (of `spec.region`,
- *   via holidayName), in-between bridge days and Christmas week; heating
+ *   via holidayName), in-between bridge days and 24 December – 2 January; heating
  *   demand in the cold, cooling demand in the heat; the published load
  *   forecast is the true load plus a daily and hourly error;
  * - wind (persistent regimes) and solar (sun height × cloudiness) lower the
@@ -68,7 +68,7 @@ export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
   const n = days + 1;
   const tempAnomaly = ar1(n, 0.5, climate.anomalyC, normal);
   const windRegime = ar1(n, 0.65, 1, normal);
-  const cloud = ar1(n, 0.75, 1, normal);
+  const cloud = ar1(n, climate.cloudPersistence, 1, normal);
   const priceShock = ar1(n, 0.55, 0.06, normal);
   const loadShock = ar1(n, 0.2, 0.05, normal);
   const tempError = Array.from({ length: n }, () => climate.forecastErrorC * normal());
@@ -157,7 +157,7 @@ function dayKind(date: string, region: string): DayKind {
   if (weekday === 7 || holidayName(date, region) !== '') return 'sunday';
   if (weekday === 6) return 'saturday';
   const md = date.slice(5);
-  if (md >= '12-27' || md <= '01-02' || isBridgeDay(date, region)) return 'bridge';
+  if (md >= '12-24' || md <= '01-02' || isBridgeDay(date, region)) return 'bridge';
   return 'working';
 }
 

@@ -1,7 +1,7 @@
 /**
  * Kinds of delivery day for demand: ordinary working day, Saturday, Sunday or
  * public holiday, and "bridge" for days many people take off (bridge days,
- * working days between Christmas and New Year).
+ * working days from 24 December to 2 January).
  */
 export type DayKind = 'working' | 'saturday' | 'sunday' | 'bridge';
 

@@ -48,6 +48,8 @@ export interface MarketSpec {
     anomalyC: number;
     /** standard deviation of the day-ahead temperature forecast error, °C */
     forecastErrorC: number;
+    /** day-to-day persistence of cloudiness, 0 (none) … below 1 (long sunny or dull spells) */
+    cloudPersistence: number;
   };
   load: {
     /** load of a mild working day at the midday plateau, MW */
@@ -116,6 +118,9 @@ export function checkMarketSpec(spec: MarketSpec): void {
     ['spikesPerYear', spec.spikesPerYear],
   ];
   for (const [field, v] of nonNegative) if (!(v >= 0)) fail(`${field} must be zero or more, got ${v}`);
+  if (!(spec.climate.cloudPersistence >= 0 && spec.climate.cloudPersistence < 1)) {
+    fail(`climate.cloudPersistence must lie in [0, 1), got ${spec.climate.cloudPersistence}`);
+  }
   if (!(spec.fuel.reversionPerDay >= 0 && spec.fuel.reversionPerDay < 1)) {
     fail(`fuel.reversionPerDay must lie in [0, 1), got ${spec.fuel.reversionPerDay}`);
   }

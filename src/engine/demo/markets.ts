@@ -24,7 +24,7 @@ export const DEMO_MARKET: MarketSpec = {
   longitude: 11,
   currency: 'EUR',
   extraDrivers: [],
-  climate: { meanC: 10, seasonC: 9.5, warmestDay: 200, dayNightC: 8, anomalyC: 4, forecastErrorC: 0.9 },
+  climate: { meanC: 10, seasonC: 9.5, warmestDay: 200, dayNightC: 8, anomalyC: 4, forecastErrorC: 0.9, cloudPersistence: 0.75 },
   load: {
     baseMW: 6000,
     heatingMWPerC: 130,
@@ -63,7 +63,7 @@ export const SOLAR_MARKET: MarketSpec = {
   longitude: 138.6,
   currency: 'AUD',
   extraDrivers: ['solar_forecast'],
-  climate: { meanC: 17, seasonC: 6, warmestDay: 25, dayNightC: 10, anomalyC: 3, forecastErrorC: 1.0 },
+  climate: { meanC: 17, seasonC: 6, warmestDay: 25, dayNightC: 10, anomalyC: 3, forecastErrorC: 1.0, cloudPersistence: 0.4 },
   load: {
     baseMW: 1700,
     heatingMWPerC: 22,
@@ -72,7 +72,7 @@ export const SOLAR_MARKET: MarketSpec = {
     coolingAboveC: 23,
     forecastError: 0.02,
   },
-  supply: { capacityMW: 2500, windMW: 800, solarMW: 1350 },
+  supply: { capacityMW: 2500, windMW: 500, solarMW: 1500 },
   fuel: { start: 95, trendPerYear: 0.02, reversionPerDay: 0.012, volatilityPerDay: 0.02 },
-  spikesPerYear: 18,
+  spikesPerYear: 12,
 };
