@@ -12,7 +12,7 @@ describe('serialToWallClock(serial) — ECMA-376 1900 date system', () => {
     [61, '1900-03-01'],
     [25569, '1970-01-01'],
     [45658, '2025-01-01'],
-    [46112, '2026-03-30'],
+    [46112, '2026-03-31'], // 45658 + 365 = 46023 is 2026-01-01, then 31 + 28 + 30 days
   ])('serial %d is %s', (serial, date) => {
     expect(serialToWallClock(serial)).toEqual({ date, minutes: 0 });
   });

@@ -43,7 +43,7 @@ export async function trainCommand(flags: TrainFlags): Promise<void> {
     model: stored.settings.kind, saved: flags.save, kilobytes: Math.round(text.length / 102.4) / 10,
     trained_from: stored.trainedFrom, trained_to: stored.trainedTo, validation_days: v.days,
     validation_mae: v.mae, validation_mae_linear: v.maeLinear, validation_mae_neural: v.maeNeural,
-    validation_mae_naive_week: v.maeNaiveWeek, neural_weight: stored.neuralWeight, ridge_lambda: stored.ridge.lambda,
+    validation_mae_naive_week: v.maeNaiveWeek, neural_weight: stored.neuralWeight, linear_members: stored.linear.map((l) => ({ window: l.window, lambda: l.lambda })),
     importance: stored.importance, notes: stored.notes, seconds: (Date.now() - started) / 1000,
   };
   if (flags.json) { process.stdout.write(`${JSON.stringify(summary)}\n`); return; }

@@ -19,9 +19,12 @@ export interface FeatureSetup {
   slots: number;
 }
 
-const PRICE_LAGS = [1, 2, 3, 7];
-const YEAR_LAG = 364;
 const HOURS = 24;
+const PRICE_LAGS = [1, 2, 3, 7];
+/** lags kept at full resolution: the same quarter-hour of D-1 and D-7 carries the intra-hour shape */
+const FINE_LAGS = new Set([1, 7]);
+const YEAR_LAG = 364;
+
 
 /** Days of price history a feature vector needs before its target day. */
 export function historyNeeded(setup: FeatureSetup): number {
@@ -33,7 +36,9 @@ export function featureLayout(setup: FeatureSetup): { group: FeatureGroup; names
   const layout: { group: FeatureGroup; names: string[] }[] = [];
   const add = (group: FeatureGroup, names: string[]) => { if (setup.groups.includes(group) && names.length) layout.push({ group, names }); };
   const profile = (prefix: string) => Array.from({ length: HOURS }, (_, h) => `${prefix}_h${String(h).padStart(2, '0')}`);
-  add('price_lags', PRICE_LAGS.flatMap((lag) => profile(`price_d${lag}`)));
+  const fine = (prefix: string) => setup.slots === HOURS ? profile(prefix)
+    : Array.from({ length: setup.slots }, (_, k) => `${prefix}_s${String(k).padStart(2, '0')}`);
+  add('price_lags', PRICE_LAGS.flatMap((lag) => (FINE_LAGS.has(lag) ? fine(`price_d${lag}`) : profile(`price_d${lag}`))));
   add('price_d1_stats', ['price_d1_mean', 'price_d1_min', 'price_d1_max']);
   add('price_year_ago', profile('price_d364'));
   add('price_changes', ['mean_change_d1_d2', 'mean_change_d1_d8']);
@@ -66,14 +71,14 @@ export function dayFeatures(view: DayFrame, setup: FeatureSetup): { x: Float64Ar
   const out: number[] = [];
   const g = new Set(setup.groups);
   const z = (p: number) => toScaled(p, scale);
-  const priceProfile = (lag: number) => { for (const v of hourly(view.price[d - lag], perHour)) out.push(z(v)); };
+  const priceProfile = (lag: number, full = false) => { for (const v of full ? view.price[d - lag] : hourly(view.price[d - lag], perHour)) out.push(z(v)); };
   const driverRow = (name: string, lag: number) => {
     const { mean, sd } = setup.driverStats[name];
     return hourly(view.drivers[name][d - lag], perHour).map((v) => (v - mean) / sd);
   };
   const dailyMean = (lag: number) => mean(view.price[d - lag]);
 
-  if (g.has('price_lags')) for (const lag of PRICE_LAGS) priceProfile(lag);
+  if (g.has('price_lags')) for (const lag of PRICE_LAGS) priceProfile(lag, FINE_LAGS.has(lag));
   if (g.has('price_d1_stats')) {
     const row = view.price[d - 1];
     out.push(z(mean(row)), z(Math.min(...row)), z(Math.max(...row)));

@@ -14,27 +14,16 @@ export function emptyGram(p: number, m: number): Gram {
   return { p, m, xtx: new Float64Array(p * p), xty: new Float64Array(p * m), rows: 0 };
 }
 
-/** Adds one row x (length p) with targets y (length m). */
-export function addRow(g: Gram, x: ArrayLike<number>, y: ArrayLike<number>): void {
+/** Adds one row x (length p) with targets y (length m); weight −1 takes a row out again. */
+export function addRow(g: Gram, x: ArrayLike<number>, y: ArrayLike<number>, weight: 1 | -1 = 1): void {
   const { p, m, xtx, xty } = g;
   for (let i = 0; i < p; i++) {
-    const xi = x[i];
+    const xi = x[i] * weight;
     if (xi === 0) continue;
     const ri = i * p;
     for (let j = 0; j <= i; j++) xtx[ri + j] += xi * x[j];
     const ci = i * m;
     for (let c = 0; c < m; c++) xty[ci + c] += xi * y[c];
   }
-  g.rows++;
-}
-
-/** XᵀX + λ I as a full symmetric matrix (addRow fills only the lower triangle). */
-export function penalised(g: Gram, lambda: number): Float64Array {
-  const { p, xtx } = g;
-  const a = new Float64Array(p * p);
-  for (let i = 0; i < p; i++) {
-    for (let j = 0; j <= i; j++) { a[i * p + j] = xtx[i * p + j]; a[j * p + i] = xtx[i * p + j]; }
-    a[i * p + i] += lambda;
-  }
-  return a;
+  g.rows += weight;
 }

@@ -63,7 +63,7 @@ export function learnerFromStored(stored: StoredModel, source = 'the model'): Le
     setup: { ...stored.setup, driverStats },
     notes: stored.notes,
     standardiser: { mean: floats(stored.standardiser.mean, 8, p, 'standardiser.mean'), sd: floats(stored.standardiser.sd, 8, p, 'standardiser.sd') },
-    ridge: { lambda: stored.ridge.lambda, weights: floats(stored.ridge.weights, 4, (p + 1) * m, 'ridge.weights') },
+    linear: stored.linear.map((l, k) => ({ window: l.window, lambda: l.lambda, weights: floats(l.weights, 4, (p + 1) * m, `linear.${k}.weights`) })),
     networks,
     targetRange: { lo: floats(stored.targetRange.lo, 8, m, 'targetRange.lo'), hi: floats(stored.targetRange.hi, 8, m, 'targetRange.hi') },
     neuralWeight: stored.neuralWeight,

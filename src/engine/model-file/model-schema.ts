@@ -39,7 +39,7 @@ export const StoredModelSchema = z.strictObject({
   }),
   notes: z.array(z.string().max(300)).max(20),
   standardiser: z.strictObject({ mean: Floats, sd: Floats }),
-  ridge: z.strictObject({ lambda: Finite.positive(), weights: Floats }),
+  linear: z.array(z.strictObject({ window: z.number().int().min(0).max(10_000), lambda: Finite.positive(), weights: Floats })).min(1).max(8),
   networks: z.array(z.strictObject({
     sizes: z.array(z.number().int().min(1).max(4096)).min(3).max(6),
     weights: z.array(Floats).max(6),

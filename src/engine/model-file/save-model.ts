@@ -30,7 +30,7 @@ export function toStoredModel(learner: Learner, meta: { name: string; zone: stri
     },
     notes: state.notes,
     standardiser: { mean: f64(state.standardiser.mean), sd: f64(state.standardiser.sd) },
-    ridge: { lambda: state.ridge.lambda, weights: encodeFloats(state.ridge.weights, 4) },
+    linear: state.linear.map((l) => ({ window: l.window, lambda: l.lambda, weights: encodeFloats(l.weights, 4) })),
     // ridge coefficients are 32-bit (solveRidge) and brain.js keeps 32-bit weights: 4 bytes store both exactly
     networks: state.networks.map((n) => ({
       sizes: n.sizes,

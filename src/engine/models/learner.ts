@@ -5,10 +5,11 @@ import type { FeatureGroup } from '../features/feature-groups';
 import { fromScaled } from '../features/level-scale';
 import { targetDay, type DayFrame } from '../series/day-frame';
 import { addResiduals, band, emptyPool, type ResidualPool } from './bands';
-import { LearnerSettingsSchema, RIDGE_LAMBDAS, type LearnerSettings } from './learner-settings';
+import { LearnerSettingsSchema, type LearnerSettings } from './learner-settings';
 import type { DayAheadModel, DayForecast, Progress } from './model';
 import { loadNetwork, trainNetwork, type NetworkJson } from './network';
-import { addRidgeDay, predictRidge, ridgeGram, solveRidge, type Ridge } from './ridge';
+import { advanceMember, fitLinearEnsemble, linearPrice, windowOf, type LinearMember, type MemberSums } from './linear-ensemble';
+import { ridgeGram } from './ridge';
 import { fitStandardiser, standardise, type Standardiser } from './standardiser';
 import { FeatureCache, type TrainingDay } from './training-days';
 
@@ -17,7 +18,8 @@ export interface LearnerState {
   setup: FeatureSetup;
   notes: string[];
   standardiser: Standardiser;
-  ridge: { lambda: number; weights: Float64Array };
+  /** ridge models on several calibration windows (linear-ensemble.ts) */
+  linear: LinearMember[];
   networks: NetworkJson[];
   /** affine map of scaled targets into the sigmoid's (0, 1): y01 = 0.1 + 0.8 (z − lo) / (hi − lo) */
   targetRange: { lo: Float64Array; hi: Float64Array };
@@ -35,7 +37,7 @@ export interface LearnerState {
 const MIN_TRAINING_DAYS = 56;
 
 /**
- * The learned day-ahead model: a ridge model and an ensemble of brain.js
+ * The learned day-ahead model: averaged ridge models and an ensemble of brain.js
  * networks on the same features, blended with a weight chosen on a
  * chronological validation block at the end of the training span.
  * `kind` neural or linear uses one part alone.
@@ -45,7 +47,7 @@ export class Learner implements DayAheadModel {
   readonly settings: LearnerSettings;
   state?: LearnerState;
   private cache?: FeatureCache;
-  private ridge?: Ridge;
+  private sums?: MemberSums[];
   private nets: ((x: Float64Array) => Float64Array)[] = [];
   private readonly issued = new Map<number, { point: Float64Array; scale: number }>();
 
@@ -83,15 +85,8 @@ export class Learner implements DayAheadModel {
     const maeOn = (preds: Float64Array[]) => meanAbs(val.map(actual), preds);
 
     // linear part: penalty chosen on the validation block
-    const trainGram = ridgeGram(train.map((d) => d.x), train.map((d) => d.y!), standardiser);
-    let lambda = RIDGE_LAMBDAS[0], linVal: Float64Array[] = [], best = Infinity;
-    let linearTrainOnly: Float64Array = new Float64Array(0);
-    for (const l of RIDGE_LAMBDAS) {
-      const w = solveRidge(trainGram, l);
-      const preds = val.map((d) => priceOf(d, predictRidge(w, standardiser, d.x, m)));
-      const e = maeOn(preds);
-      if (e < best) { best = e; lambda = l; linVal = preds; linearTrainOnly = w; }
-    }
+    const linear = fitLinearEnsemble(train, val, days, standardiser, m, maeOn);
+    const linVal = val.map((d) => linearPrice(linear.trainOnly, standardiser, d.x, m, d.scale));
     progress?.(1, 1, 'linear model');
 
     // neural part: an ensemble of seeds, early-stopped on validation MAE
@@ -128,7 +123,7 @@ export class Learner implements DayAheadModel {
     }
     const combined = s.kind === 'linear' ? linVal : mix(nnVal, linVal, neuralWeight);
     const importance = permutationImportance(setup, val, maeOn(combined), s.seed, (x, d) => {
-      const lin = priceOf(d, predictRidge(linearTrainOnly, standardiser, x, m));
+      const lin = linearPrice(linear.trainOnly, standardiser, x, m, d.scale);
       if (networks.length === 0 || neuralWeight === 0) return lin;
       const input = standardise(x, standardiser);
       const sum = new Float64Array(m);
@@ -139,11 +134,9 @@ export class Learner implements DayAheadModel {
     const residuals = emptyPool(m, Math.max(vDays, 91));
     val.forEach((d, i) => addResiduals(residuals, actual(d), combined[i], d.scale.scale));
 
-    // refit the linear part on the whole span with the chosen penalty
-    const gram = ridgeGram(days.map((d) => d.x), days.map((d) => d.y!), standardiser);
     const state: LearnerState = {
       setup, notes, standardiser,
-      ridge: { lambda, weights: solveRidge(gram, lambda) },
+      linear: linear.members,
       networks, targetRange: { lo, hi }, neuralWeight, residuals,
       validation: {
         days: vDays, mae: maeOn(combined), maeLinear: maeOn(linVal), maeNeural: nnVal.length ? maeOn(nnVal) : NaN,
@@ -153,7 +146,7 @@ export class Learner implements DayAheadModel {
       trainedFrom: view.days[days[0].day].date,
       trainedTo: view.days[view.price.length - 1].date,
     };
-    this.adopt(state, cache, { standardiser, lambda, gram, weights: state.ridge.weights });
+    this.adopt(state, cache, linear.sums);
   }
 
   predict(view: DayFrame): DayForecast {
@@ -179,10 +172,8 @@ export class Learner implements DayAheadModel {
     const from = firstDayAfter(view, state.trainedTo);
     if (from >= view.price.length) return;
     const fresh = cache.trainingDays(view, from, view.price.length);
-    const ridge = this.linearSums(view, from);
-    for (const d of fresh) addRidgeDay(ridge, d.x, d.y!);
-    ridge.weights = solveRidge(ridge.gram, ridge.lambda);
-    state.ridge.weights = ridge.weights;
+    const sums = this.linearSums(view, from);
+    state.linear.forEach((member, k) => advanceMember(member, sums[k], fresh, state.standardiser));
     state.trainedTo = view.days[view.price.length - 1].date;
     if (this.settings.kind !== 'linear' && this.settings.warmEpochs > 0) {
       const all = cache.trainingDays(view, 0, view.price.length);
@@ -202,7 +193,7 @@ export class Learner implements DayAheadModel {
   private pointForecast(x: Float64Array, scale: { centre: number; scale: number }): Float64Array {
     const state = this.fitted();
     const m = state.targetRange.lo.length;
-    const lin = predictRidge(state.ridge.weights, state.standardiser, x, m).map((z) => fromScaled(z, scale));
+    const lin = linearPrice(state.linear, state.standardiser, x, m, scale);
     if (this.nets.length === 0) return lin;
     const input = standardise(x, state.standardiser);
     const { lo, hi } = state.targetRange;
@@ -228,13 +219,15 @@ export class Learner implements DayAheadModel {
   }
 
   /** The linear model's running sums; after loading a stored model they are rebuilt from the history. */
-  private linearSums(view: DayFrame, upTo: number): Ridge {
-    if (this.ridge) return this.ridge;
+  private linearSums(view: DayFrame, upTo: number): MemberSums[] {
+    if (this.sums) return this.sums;
     const state = this.fitted();
-    const days = this.featureCache().trainingDays(view, 0, upTo);
-    const gram = ridgeGram(days.map((d) => d.x), days.map((d) => d.y!), state.standardiser);
-    this.ridge = { standardiser: state.standardiser, lambda: state.ridge.lambda, gram, weights: state.ridge.weights };
-    return this.ridge;
+    const all = this.featureCache().trainingDays(view, 0, upTo);
+    this.sums = state.linear.map((member) => {
+      const days = windowOf(all, member.window);
+      return { gram: ridgeGram(days.map((d) => d.x), days.map((d) => d.y!), state.standardiser), days: [...days] };
+    });
+    return this.sums;
   }
 
   private featureCache(): FeatureCache {
@@ -247,10 +240,10 @@ export class Learner implements DayAheadModel {
     return this.state;
   }
 
-  private adopt(state: LearnerState, cache?: FeatureCache, ridge?: Ridge): void {
+  private adopt(state: LearnerState, cache?: FeatureCache, sums?: MemberSums[]): void {
     this.state = state;
     this.cache = cache;
-    this.ridge = ridge;
+    this.sums = sums;
     this.nets = this.settings.kind === 'linear' ? [] : state.networks.map(loadNetwork);
     this.issued.clear();
   }

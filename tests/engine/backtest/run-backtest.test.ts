@@ -34,7 +34,7 @@ describe('runBacktest(model, frame, series, options)', () => {
     expect(summary.mae).toBeCloseTo(sum / n, 9);
     expect(summary.periods).toBe(n);
     expect(summary.rmae).toBeCloseTo(1, 12);
-    expect(summary.days).toBe(9);
+    expect(summary.days).toBe(18); // 2025-04-01 to 2025-04-18
   });
 
   it('weekday-rule uses D-1 on Tuesday and D-7 on Monday', () => {
