@@ -4,8 +4,13 @@
  * (memory-workbook.ts) that the standalone preview and the tests use. The
  * pane and the cell functions only ever talk to this interface.
  *
- * Addresses are A1 style, optionally with a sheet: `History!A2:C900`.
- * Values are rows × columns; an empty cell is `null`.
+ * Addresses are A1 style, optionally with a sheet: `History!A2:C900`; an
+ * address without a sheet means the active sheet.
+ * Values are rows × columns; an empty cell reads as `null`, and writing
+ * `null` (or `''`) leaves the cell empty.
+ *
+ * Models are stored in the workbook itself (office-workbook.ts says where),
+ * one text per model name; model-store.ts validates every text on load.
  */
 export type CellValue = string | number | boolean | null;
 
