@@ -81,9 +81,9 @@ describe('checkData(port, choice, zone)', () => {
     const n = grid.length;
     const data = await checkData(port, { times: `History!A1:A${n + 20}`, prices: `History!B1:B${n + 20}`, drivers: [`History!C1:C${n + 20}`] }, 'Europe/Berlin');
     expect(data.series.resolution).toBe(60);
-    expect(data.series.times.length).toBe(14 * 24);
+    expect(data.series.times.length).toBe(14 * 24 + 1); // 13 days of 24 hours and one of 25
     expect(Object.keys(data.series.drivers)).toEqual(['load forecast']);
-    expect(data.lines[0]).toMatch(/^336 periods of 60 minutes in 14 delivery days, 2025-10-20 to 2025-11-02 \(Europe\/Berlin\)$/);
+    expect(data.lines[0]).toMatch(/^337 periods of 60 minutes in 14 delivery days, 2025-10-20 to 2025-11-02 \(Europe\/Berlin\)$/);
     expect(data.lines.join('\n')).toMatch(/daylight-saving days: 2025-10-26 \(25\)/);
     // both 02:00 rows of 2025-10-26 became distinct instants, an hour apart
     const twoAm = data.series.times.filter((t) => formatTimestamp(t, 'Europe/Berlin').startsWith('2025-10-26T02:00'));
