@@ -1,5 +1,5 @@
 import {
-  InputError, parseTimestamp, serialToWallClock, toWallClock, wallClockToUtc,
+  dayNumber, InputError, parseTimestamp, serialToWallClock, toWallClock, wallClockToUtc,
   type WallClock, type Where,
 } from '../engine';
 import { isBlank } from './cells';
@@ -32,10 +32,11 @@ const LOCAL = /^(\d{4}-\d{2}-\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2}))?)?$/;
 
 export function readTimes(cells: unknown[], zone: string, what: string, dateSystem: DateSystem = '1900', firstRow = 1): (number | undefined)[] {
   const seen = new Set<string>();
+  const offsets = new Map<string, number | null>();
   return cells.map((v, i) => {
     const where: Where = { column: what, row: i + firstRow };
     if (isBlank(v)) return undefined;
-    if (typeof v === 'number') return fromWall(serialWall(v, dateSystem, where), zone, seen, where);
+    if (typeof v === 'number') return fromWall(serialWall(v, dateSystem, where), zone, seen, offsets, where);
     if (typeof v === 'string') {
       const text = v.trim();
       if (WITH_OFFSET.test(text)) return exactInstant(text, zone, where);
@@ -44,7 +45,8 @@ export function readTimes(cells: unknown[], zone: string, what: string, dateSyst
         if (m[4] !== undefined && m[4] !== '00') throw new InputError(`"${text}" has seconds; delivery periods start on whole minutes`, where);
         const minutes = m[2] === undefined ? 0 : Number(m[2]) * 60 + Number(m[3]);
         if (minutes >= 1440 || Number(m[3] ?? 0) > 59) throw new InputError(`"${text}" is not a time of day`, where);
-        return fromWall({ date: m[1], minutes }, zone, seen, where);
+        relocating(where, () => dayNumber(m[1]));
+        return fromWall({ date: m[1], minutes }, zone, seen, offsets, where);
       }
       throw new InputError(
         `"${clip(text)}" is not a timestamp; use a date-time cell or text like 2025-03-30T03:00:00+02:00`,
@@ -75,7 +77,10 @@ function serialWall(serial: number, dateSystem: DateSystem, where: Where): WallC
   }
 }
 
-function fromWall(wall: WallClock, zone: string, seen: Set<string>, where: Where): number {
+function fromWall(wall: WallClock, zone: string, seen: Set<string>, offsets: Map<string, number | null>, where: Where): number {
+  // fast path: on a day without a clock change the zone's offset is one number
+  const offset = dayOffset(wall.date, zone, offsets);
+  if (offset !== null) return Date.parse(`${wall.date}T00:00:00Z`) + wall.minutes * 60_000 - offset;
   try {
     const early = wallClockToUtc(wall, zone, false);
     const late = wallClockToUtc(wall, zone, true);
@@ -89,6 +94,27 @@ function fromWall(wall: WallClock, zone: string, seen: Set<string>, where: Where
   }
 }
 
+/**
+ * The zone's UTC offset (ms) throughout a local date, or null when it changes
+ * on or near that date (then the exact, slower conversion decides). The
+ * offset is taken 14 hours before the date's wall-clock midnight and 38
+ * hours after it, which brackets the whole local day for any offset.
+ */
+function dayOffset(date: string, zone: string, cache: Map<string, number | null>): number | null {
+  let hit = cache.get(date);
+  if (hit === undefined) {
+    const midnight = Date.parse(`${date}T00:00:00Z`);
+    const at = (ms: number) => {
+      const c = toWallClock(ms, zone);
+      return Date.parse(`${c.date}T00:00:00Z`) + c.minutes * 60_000 - Math.floor(ms / 60_000) * 60_000;
+    };
+    const before = at(midnight - 14 * 3_600_000);
+    hit = Number.isFinite(before) && before === at(midnight + 38 * 3_600_000) ? before : null;
+    cache.set(date, hit);
+  }
+  return hit;
+}
+
 function exactInstant(text: string, zone: string, where: Where): number {
   const ms = parseTimestamp(text, where);
   const m = WITH_OFFSET.exec(text)!;
@@ -99,6 +125,14 @@ function exactInstant(text: string, zone: string, where: Where): number {
     throw new InputError(`"${text}" is not a local time of ${zone} (its UTC offset differs); give timestamps of the market's own zone`, where);
   }
   return ms;
+}
+
+function relocating<T>(where: Where, f: () => T): T {
+  try {
+    return f();
+  } catch (err) {
+    throw relocate(err, where);
+  }
 }
 
 function relocate(err: unknown, where: Where): unknown {

@@ -49,6 +49,7 @@ describe('readTimes', () => {
     expect(() => readTimes([45658, 'tomorrow'], BERLIN, 'times')).toThrow(/row 2, column "times": "tomorrow" is not a timestamp/);
     expect(() => readTimes([true], BERLIN, 'times')).toThrow(/TRUE is not a timestamp/);
     expect(() => readTimes(['2025-01-01 10:00:30'], BERLIN, 'times')).toThrow(/seconds/);
+    expect(() => readTimes(['2025-02-30 10:00'], BERLIN, 'times')).toThrow(/row 1, column "times": "2025-02-30" is not a calendar date/);
   });
 
   it('readTimes numbers rows from firstRow', () => {
