@@ -29,7 +29,10 @@ export function parseTimestamp(text: string, where?: Where): number {
     if (v < lo || v > hi) throw new InputError(`"${text}" has ${name} ${v} out of range`, where);
   }
   const ms = Math.round(Number(`0.${frac}`) * 1000);
-  return Date.UTC(year, month - 1, day, hour, minute, second, ms) - offsetMinutes(off) * 60_000;
+  // Date.UTC reads years 0-99 as 1900-1999: set the full year separately
+  const utc = new Date(Date.UTC(2000, month - 1, day, hour, minute, second));
+  utc.setUTCFullYear(year, month - 1, day);
+  return utc.getTime() + ms - offsetMinutes(off) * 60_000;
 }
 
 function offsetMinutes(off: string): number {
@@ -42,5 +45,6 @@ function offsetMinutes(off: string): number {
 }
 
 function daysInMonth(year: number, month: number): number {
-  return new Date(Date.UTC(year, month, 0)).getUTCDate();
+  const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
+  return month === 2 ? (leap ? 29 : 28) : [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][month - 1];
 }
