@@ -28,11 +28,15 @@ export function parseTimestamp(text: string, where?: Where): number {
   for (const [v, lo, hi, name] of fields) {
     if (v < lo || v > hi) throw new InputError(`"${text}" has ${name} ${v} out of range`, where);
   }
+  const offset = offsetMinutes(off);
+  if (Math.abs(offset) >= 24 * 60 || (off.length > 3 && +off.slice(-2) > 59)) {
+    throw new InputError(`"${text}" has UTC offset ${off} out of range (hours 00-23, minutes 00-59)`, where);
+  }
   const ms = Math.round(Number(`0.${frac}`) * 1000);
   // Date.UTC reads years 0-99 as 1900-1999: set the full year separately
   const utc = new Date(Date.UTC(2000, month - 1, day, hour, minute, second));
   utc.setUTCFullYear(year, month - 1, day);
-  return utc.getTime() + ms - offsetMinutes(off) * 60_000;
+  return utc.getTime() + ms - offset * 60_000;
 }
 
 function offsetMinutes(off: string): number {

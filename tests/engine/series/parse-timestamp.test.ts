@@ -21,3 +21,16 @@ describe('parseTimestamp(text)', () => {
     expect(parseTimestamp('0099-12-31T23:59:59.9999Z')).toBe(DateTime.fromISO('0100-01-01T00:00:00Z').toMillis());
   });
 });
+
+describe('parseTimestamp(text) refuses offsets out of range', () => {
+  it.each(['2025-01-01T00:00-82:62', '2025-01-01T00:00+24:00', '2025-01-01T00:00+0160', '2025-01-01T00:00+99'])(
+    '%s (found by tests/fuzz/scalars)', (text) => {
+      expect(() => parseTimestamp(text)).toThrow(/UTC offset .* out of range/);
+    });
+
+  it('accepts the widest real offsets, +14:00 and -12:00, and +23:59', () => {
+    expect(parseTimestamp('2025-01-01T00:00+14:00')).toBe(Date.parse('2024-12-31T10:00:00Z'));
+    expect(parseTimestamp('2025-01-01T00:00-1200')).toBe(Date.parse('2025-01-01T12:00:00Z'));
+    expect(parseTimestamp('2025-01-01T00:00+23:59')).toBe(Date.parse('2024-12-31T00:01:00Z'));
+  });
+});
