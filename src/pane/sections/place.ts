@@ -1,0 +1,115 @@
+import { InputError, storedModelText } from '../../engine';
+import { writeWithConsent } from '../../host/safe-write';
+import type { PaneContext } from '../context';
+import { field, guarded, h, messageLine } from '../dom';
+import { appendToArchive, modelVersion } from '../logic/archive';
+import { freezeRange } from '../logic/freeze';
+import { OUTLOOK_FRAME, OUTLOOK_SHEET, outlookLayout, type ScoreLine } from '../logic/outlook-layout';
+import { formulaBlock, valuesBlock, type ScoredRow } from '../logic/place-layout';
+import { forecastTomorrow, rowsOfDay } from '../logic/tomorrow';
+import type { PaneState } from '../state';
+import { modelPicker } from './model-picker';
+
+/**
+ * Place: write tomorrow's forecast to the sheet, as values or as a live
+ * formula block; rebuild the Outlook sheet (and archive what it issued);
+ * freeze the Outlook to values for people without the add-in. Every write
+ * goes through writeWithConsent, which asks before overwriting a cell.
+ */
+export function placeSection(ctx: PaneContext): HTMLElement {
+  const { store, port, ask } = ctx;
+  const message = messageLine('place-message');
+  const picker = modelPicker(ctx, 'place-model');
+  const mode = h('select', { test: 'place-mode' },
+    h('option', { value: 'formulas', text: 'live formula block (=LOOM.AHEAD, =LOOM.BAND, =LOOM.SCORE)' }),
+    h('option', { value: 'values', text: 'forecast values (fixed numbers)' }));
+  const target = h('input', { type: 'text', test: 'place-address', placeholder: 'Forecast!A1' });
+  const useSelection = h('button', { class: 'loom-button loom-button-small', type: 'button', test: 'place-use-selection', text: 'use selection' });
+  useSelection.addEventListener('click', () => guarded(useSelection, message, async () => {
+    target.value = (await port.selectedAddress()).split(':')[0];
+    message.clear();
+  }));
+
+  const place = h('button', { class: 'loom-button loom-button-main', type: 'button', test: 'place-button', text: 'Place' });
+  place.addEventListener('click', () => guarded(place, message, async () => {
+    const { data } = need(store.get());
+    const entry = picker.current();
+    const anchor = target.value.trim();
+    if (!anchor) throw new InputError('type the top-left cell to write to, e.g. Forecast!A1, or select it and press "use selection"');
+    const ahead = forecastTomorrow(entry.stored!, data);
+    // LOOM.AHEAD spills the next delivery day; fixed values may cover every day that has driver rows
+    const days = mode.value === 'values' ? ahead.days : ahead.days.slice(0, 1);
+    const rows = mode.value === 'values' ? ahead.rows : rowsOfDay(ahead.rows, days[0], data.series.zone);
+    const block = mode.value === 'values'
+      ? valuesBlock({ anchor, zone: data.series.zone, rows })
+      : formulaBlock({ anchor, zone: data.series.zone, rows, model: entry.name, coverage: entry.stored!.settings.coverage, data: data.layout, backtest: backtestRows(store.get(), entry.name) });
+    const written = await writeWithConsent(port, ask, block.address, block.values);
+    if (!written) { message.info('Nothing was written.'); return; }
+    const scoreNote = mode.value === 'formulas' && !backtestRows(store.get(), entry.name) ? ' Run a backtest in Check first to add =LOOM.SCORE rows.' : '';
+    message.ok(`Wrote ${rows.length} periods for ${days.join(', ')} to ${block.address}.${scoreNote}`);
+  }));
+
+  const refresh = h('button', { class: 'loom-button loom-button-main', type: 'button', test: 'outlook-button', text: 'Refresh outlook' });
+  refresh.addEventListener('click', () => guarded(refresh, message, async () => {
+    const st = store.get();
+    const { data } = need(st);
+    const entry = picker.current();
+    const stored = entry.stored!;
+    const { rows, days } = forecastTomorrow(stored, data);
+    const firstDay = rowsOfDay(rows, days[0], data.series.zone);
+    const issuedAt = Math.floor(ctx.now() / 1000) * 1000; // whole seconds in the archive
+    const layout = outlookLayout({
+      model: entry.name, coverage: stored.settings.coverage, issuedAt, zone: data.series.zone,
+      rows: firstDay, data: data.layout, scores: scoreLines(st, entry.name),
+    });
+    await port.ensureSheet(OUTLOOK_SHEET);
+    const written = await writeWithConsent(port, ask, layout.frame, layout.values);
+    if (!written) { message.info('The Outlook sheet was left as it was; nothing was archived.'); return; }
+    await port.addLineChart(layout.chart.sheet, layout.chart.address, layout.chart.title);
+    const archived = await appendToArchive(port, {
+      issuedAt, model: entry.name, created: stored.createdAt, version: modelVersion(stored.version, storedModelText(stored)), zone: data.series.zone,
+    }, firstDay);
+    message.ok(`Outlook rebuilt for ${days[0]} (${firstDay.length} periods); the issued forecast was appended to ${archived}.`);
+  }));
+
+  const freeze = h('button', { class: 'loom-button', type: 'button', test: 'freeze-button', text: 'Freeze to values' });
+  freeze.addEventListener('click', () => guarded(freeze, message, async () => {
+    if (!(await port.listSheets()).includes(OUTLOOK_SHEET)) throw new InputError('there is no Outlook sheet yet: press "Refresh outlook" first');
+    const n = await freezeRange(port, ask, OUTLOOK_FRAME);
+    message.info(n === 0 ? 'Nothing was frozen (no LOOM formulas there, or you said no).' : `Froze ${n} LOOM formulas on the Outlook sheet to their current values.`);
+  }));
+
+  return h('section', { class: 'loom-section', test: 'section-place', data: { section: 'place' } },
+    h('h2', { text: 'Place' }),
+    field('Model', picker.el, 'The model whose forecast is written.'),
+    field('What to write', mode, 'A formula block stays live and recomputes when prices change; values are fixed numbers.'),
+    field('Top-left cell', target, 'Where the block starts. You are asked before any non-empty cell is overwritten.', useSelection),
+    h('div', { class: 'loom-actions' }, place),
+    h('h3', { text: 'Outlook sheet' }),
+    h('p', { class: 'loom-help', text: `Rebuilds the sheet "${OUTLOOK_SHEET}": tomorrow's forecast with its band, the baselines, recent scores and a chart. Each refresh also appends the forecast as issued to the sheet "Forecast archive", which is never rewritten.` }),
+    h('div', { class: 'loom-actions' }, refresh, freeze),
+    message.el,
+  );
+}
+
+function need(st: PaneState) {
+  if (!st.data) throw new InputError('check the data first (Data section): the forecast uses the ranges as checked there');
+  return { data: st.data };
+}
+
+function backtestRows(st: PaneState, model: string): ScoredRow[] | undefined {
+  if (!st.backtest || st.backtest.model !== model) return undefined;
+  return st.backtest.outcome.rows.map((r) => ({ time: r.time, actual: r.actual, forecast: r.forecast, naiveWeek: r.naiveWeek }));
+}
+
+function scoreLines(st: PaneState, model: string): ScoreLine[] {
+  const lines: ScoreLine[] = [];
+  if (st.backtest && st.backtest.model === model) {
+    const span = `backtest ${st.backtest.outcome.testStart} to ${st.backtest.outcome.testEnd}`;
+    for (const s of st.backtest.outcome.summaries) lines.push({ name: s.model, mae: s.mae, rmse: s.rmse, smape: s.smape, rmae: s.rmae, coverage: s.coverage, span });
+  }
+  for (const g of st.grades ?? []) {
+    lines.push({ name: `issued by ${g.model}`, mae: g.mae, rmse: g.rmse, smape: g.smape, rmae: NaN, coverage: g.coverage, span: `archive, ${g.periods} periods` });
+  }
+  return lines;
+}
