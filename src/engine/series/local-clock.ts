@@ -1,5 +1,6 @@
 import { DateTime, IANAZone } from 'luxon';
 import { InputError } from '../errors';
+import { quoteCell } from './quote-cell';
 import type { WallClock } from './serial-date';
 
 /**
@@ -10,7 +11,7 @@ import type { WallClock } from './serial-date';
 /** @throws InputError when `zone` is not an IANA time zone name. */
 export function checkZone(zone: string): void {
   if (!IANAZone.isValidZone(zone)) {
-    throw new InputError(`"${zone}" is not an IANA time zone name such as Europe/Berlin`);
+    throw new InputError(`${quoteCell(zone)} is not an IANA time zone name such as Europe/Berlin`);
   }
 }
 

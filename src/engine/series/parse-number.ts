@@ -1,4 +1,5 @@
 import { InputError, type Where } from '../errors';
+import { quoteCell } from './quote-cell';
 
 const NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
 
@@ -12,10 +13,6 @@ const NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
 export function parseNumber(text: string, where?: Where): number {
   const t = text.trim();
   if (t === '') return NaN;
-  if (!NUMBER.test(t)) throw new InputError(`"${clip(t)}" is not a number (use . as decimal separator)`, where);
+  if (!NUMBER.test(t)) throw new InputError(`${quoteCell(t)} is not a number (use . as decimal separator)`, where);
   return Number(t);
-}
-
-function clip(t: string): string {
-  return t.length > 40 ? `${t.slice(0, 40)}…` : t;
 }

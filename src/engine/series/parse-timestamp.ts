@@ -1,4 +1,5 @@
 import { InputError, type Where } from '../errors';
+import { quoteCell } from './quote-cell';
 
 // Date, time and a mandatory offset: without one a local time is ambiguous
 // on the day the clocks go back, so we refuse rather than guess.
@@ -15,7 +16,7 @@ export function parseTimestamp(text: string, where?: Where): number {
   const m = ISO.exec(text.trim());
   if (!m) {
     throw new InputError(
-      `"${text}" is not a timestamp with a UTC offset; write it like 2025-03-30T03:00:00+02:00 or 2025-03-30T01:00:00Z`,
+      `${quoteCell(text)} is not a timestamp with a UTC offset; write it like 2025-03-30T03:00:00+02:00 or 2025-03-30T01:00:00Z`,
       where,
     );
   }
@@ -26,11 +27,11 @@ export function parseTimestamp(text: string, where?: Where): number {
     [hour, 0, 23, 'hour'], [minute, 0, 59, 'minute'], [second, 0, 59, 'second'],
   ];
   for (const [v, lo, hi, name] of fields) {
-    if (v < lo || v > hi) throw new InputError(`"${text}" has ${name} ${v} out of range`, where);
+    if (v < lo || v > hi) throw new InputError(`${quoteCell(text)} has ${name} ${v} out of range`, where);
   }
   const offset = offsetMinutes(off);
   if (Math.abs(offset) >= 24 * 60 || (off.length > 3 && +off.slice(-2) > 59)) {
-    throw new InputError(`"${text}" has UTC offset ${off} out of range (hours 00-23, minutes 00-59)`, where);
+    throw new InputError(`${quoteCell(text)} has UTC offset ${off} out of range (hours 00-23, minutes 00-59)`, where);
   }
   const ms = Math.round(Number(`0.${frac}`) * 1000);
   // Date.UTC reads years 0-99 as 1900-1999: set the full year separately
