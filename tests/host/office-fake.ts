@@ -1,0 +1,125 @@
+import { OfficeMockObject } from 'office-addin-mock';
+import { formatA1, parseA1 } from '../../src/host/a1';
+import type { CellValue } from '../../src/host/workbook-port';
+
+/**
+ * A small stand-in for the host's Excel API, built on office-addin-mock's
+ * OfficeMockObject where it fits: a range's `values`, `formulas` and
+ * `address`, a function result's `value` and a null object's `isNullObject`
+ * read as errors until they are loaded and synced, so the adapter must load
+ * what it reads. Collections and custom XML parts are plain objects whose
+ * contents arrive at `context.sync()`, as batched requests do; writes and
+ * deletions also take effect at sync. Cells are kept as the host gives them
+ * ('' for empty).
+ */
+export interface FakePart {
+  id: string;
+  xml: string;
+}
+
+export interface FakeExcel {
+  Excel: unknown;
+  sheets: Map<string, Map<string, CellValue>>;
+  parts: FakePart[];
+  charts: { sheet: string; type: string; address: string; seriesBy: string; title: string }[];
+  syncs: number;
+  requests: { address: string; cells: number }[];
+}
+
+export function fakeExcel(init: { sheets?: Record<string, CellValue[][]>; parts?: FakePart[]; dateSystem?: '1900' | '1904'; selection?: string } = {}): FakeExcel {
+  const state: FakeExcel = { Excel: undefined, sheets: new Map(), parts: [...(init.parts ?? [])], charts: [], syncs: 0, requests: [] };
+  for (const [name, grid] of Object.entries(init.sheets ?? { Sheet1: [] })) {
+    const cells = new Map<string, CellValue>();
+    grid.forEach((row, r) => row.forEach((v, c) => v !== null && v !== '' && cells.set(`${r},${c}`, v)));
+    state.sheets.set(name, cells);
+  }
+  const tracked: OfficeMockObject[] = [];
+  const addresses = new WeakMap<object, string>(); // what the host knows about a range without a load
+  const atSync: (() => void)[] = [];
+  let failure: Error | undefined;
+  let partIds = state.parts.length;
+  const track = <T extends OfficeMockObject>(o: T) => (tracked.push(o), o);
+  const sheetName = (name: string) => [...state.sheets.keys()].find((k) => k.toLowerCase() === name.toLowerCase());
+  const notFound = (what: string) => Object.assign(new Error(`${what} was not found`), { code: 'ItemNotFound' });
+
+  const range = (sheet: string | undefined, address: string) => {
+    const r = parseA1(address);
+    const cells = sheet ? state.sheets.get(sheet) : undefined;
+    if (!cells) failure ??= notFound(`sheet ${sheet}`);
+    const grid = Array.from({ length: r.rows }, (_, i) => Array.from({ length: r.columns }, (_, j) => cells?.get(`${r.row + i},${r.column + j}`) ?? ''));
+    const values = grid.map((row) => row.map((v) => (typeof v === 'string' && v.startsWith('=') ? 0 : v)));
+    const mock = track(new OfficeMockObject({ address: formatA1({ ...r, sheet }), values, formulas: grid }));
+    state.requests.push({ address: formatA1({ ...r, sheet }), cells: r.rows * r.columns });
+    addresses.set(mock, formatA1({ ...r, sheet }));
+    atSync.push(() => {
+      const written = (mock as unknown as { formulas: unknown }).formulas;
+      if (written !== grid && Array.isArray(written) && cells) {
+        (written as CellValue[][]).forEach((row, i) => row.forEach((v, j) => {
+          const key = `${r.row + i},${r.column + j}`;
+          if (v === '' || v === null) cells.delete(key); else cells.set(key, v);
+        }));
+      }
+    });
+    return mock;
+  };
+
+  const worksheet = (name: string | undefined) => ({
+    getRange: (address: string) => range(name, address),
+    charts: {
+      add: (type: string, source: object, seriesBy: string) => {
+        const chart = { title: { text: '' } };
+        atSync.push(() => state.charts.push({ sheet: name!, type, address: addresses.get(source)!, seriesBy, title: chart.title.text }));
+        return chart;
+      },
+    },
+  });
+
+  const parts = {
+    add: (xml: string) => atSync.push(() => state.parts.push({ id: `part-${++partIds}`, xml })),
+    getByNamespace: (ns: string) => {
+      const collection = {
+        items: [] as unknown[],
+        load: () => atSync.push(() => {
+          collection.items = state.parts.filter((p) => p.xml.includes(`xmlns="${ns}"`) || p.xml.includes(`="${ns}"`)).map((p) => ({
+            id: p.id,
+            getXml: () => {
+              const result = { value: undefined as string | undefined };
+              atSync.push(() => (result.value = p.xml));
+              return result;
+            },
+            setXml: (xml: string) => atSync.push(() => (p.xml = xml)),
+            delete: () => atSync.push(() => state.parts.splice(state.parts.indexOf(p), 1)),
+          }));
+        }),
+      };
+      return collection;
+    },
+  };
+
+  const context = {
+    workbook: {
+      functions: { date: (y: number) => track(new OfficeMockObject({ value: y === 1904 && init.dateSystem === '1904' ? 0 : 1462 })) },
+      getSelectedRange: () => {
+        const sel = parseA1(init.selection ?? 'Sheet1!A1');
+        return range(sheetName(sel.sheet ?? 'Sheet1'), formatA1({ ...sel, sheet: undefined }));
+      },
+      worksheets: {
+        items: [] as { name: string }[],
+        load(this: { items: { name: string }[] }) { atSync.push(() => (this.items = [...state.sheets.keys()].map((name) => ({ name })))); },
+        getItem: (name: string) => worksheet(sheetName(name) ?? (failure ??= notFound(`sheet ${name}`), undefined)),
+        getActiveWorksheet: () => worksheet([...state.sheets.keys()][0]),
+        getItemOrNullObject: (name: string) => track(new OfficeMockObject({ isNullObject: sheetName(name) === undefined })),
+        add: (name: string) => atSync.push(() => state.sheets.set(name, new Map())),
+      },
+      customXmlParts: parts,
+    },
+    sync: async () => {
+      state.syncs++;
+      for (const o of tracked.splice(0)) await o.sync();
+      for (const f of atSync.splice(0)) f();
+      if (failure) { const f = failure; failure = undefined; throw f; }
+    },
+  };
+  state.Excel = new OfficeMockObject({ run: async (batch: (c: typeof context) => Promise<unknown>) => batch(context) });
+  return state;
+}
