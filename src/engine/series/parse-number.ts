@@ -14,5 +14,7 @@ export function parseNumber(text: string, where?: Where): number {
   const t = text.trim();
   if (t === '') return NaN;
   if (!NUMBER.test(t)) throw new InputError(`${quoteCell(t)} is not a number (use . as decimal separator)`, where);
-  return Number(t);
+  const value = Number(t);
+  if (!Number.isFinite(value)) throw new InputError(`${quoteCell(t)} is too large for a number (beyond ±1.8e308)`, where);
+  return value;
 }
