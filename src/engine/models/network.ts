@@ -8,6 +8,10 @@ import type { NetworkOptions } from './network-options';
  * early stopping: every `checkEvery` epochs the validation loss is taken,
  * and the weights of the best check are restored at the end.
  *
+ * One network per delivery day forecasts all slots at once. `npm run
+ * bench:layout` measured it against one network per period on the demo
+ * market: validation MAE 7.89 against 8.07, in 22 s against 548 s.
+ *
  * Targets must lie in (0, 1) (the output layer is sigmoid). brain.js draws
  * its initial weights from Math.random, so Math.random is swapped for a
  * seeded generator while the network initialises: same data and seed give
