@@ -20,9 +20,10 @@ export interface WallClock {
 
 const DAY_MS = 86_400_000;
 const UNIX_EPOCH_SERIAL = 25569; // 1970-01-01 in the 1900 system
+const LAST_SERIAL = 2_958_466; // 10000-01-01, the first serial past the system's range
 
 export function serialToWallClock(serial: number): WallClock {
-  if (!Number.isFinite(serial) || serial < 1 || serial >= 2_958_466) {
+  if (!Number.isFinite(serial) || serial < 1 || serial >= LAST_SERIAL) {
     throw new InputError(`${serial} is not a spreadsheet date serial between 1 (1900-01-01) and 9999-12-31`);
   }
   if (Math.floor(serial) === 60) {
@@ -33,6 +34,9 @@ export function serialToWallClock(serial: number): WallClock {
   let whole = Math.floor(shifted);
   let minutes = Math.round((shifted - whole) * 1440);
   if (minutes === 1440) { whole += 1; minutes = 0; }
+  if (whole >= LAST_SERIAL) {
+    throw new InputError(`${serial} rounds to 10000-01-01, past the last spreadsheet date 9999-12-31`);
+  }
   const date = new Date((whole - UNIX_EPOCH_SERIAL) * DAY_MS).toISOString().slice(0, 10);
   return { date, minutes };
 }
