@@ -1,9 +1,10 @@
-import { ALL_FEATURE_GROUPS, InputError, parseStoredModel, type FeatureGroup } from '../../engine';
+import { ALL_FEATURE_GROUPS, InputError } from '../../engine';
 import { LossChart } from '../charts/loss-chart';
 import type { PaneContext } from '../context';
 import { clear, field, fmt, guarded, h, messageLine } from '../dom';
 import { checkModelName } from '../logic/model-shelf';
 import { defaultForm, FIELD_HELP, groupLabel, readTrainForm, type FormField, type TrainForm } from '../logic/settings-form';
+import { trainAndSave } from '../jobs/train-and-save';
 import { jobProgress } from './job-progress';
 
 const help = (f: FormField) => FIELD_HELP.find((x) => x.field === f)!;
@@ -78,7 +79,8 @@ export function trainSection(ctx: PaneContext): HTMLElement {
     }
     for (const w of checked.warnings) warnings.appendChild(h('li', { text: w }));
     const existing = await ctx.port.loadModels();
-    if (modelName in existing && !(await ctx.ask(`A model named "${modelName}" is already saved. Train a new one and replace it when training ends?`))) {
+    const replacing = modelName in existing;
+    if (replacing && !(await ctx.ask(`A model named "${modelName}" is already saved. Train a new one and replace it when training ends?`))) {
       message.info('Nothing trained; pick another model name to keep both.');
       return;
     }
@@ -86,16 +88,14 @@ export function trainSection(ctx: PaneContext): HTMLElement {
     lossNote.textContent = 'The validation loss appears here while the networks train.';
     message.info(`Training a ${checked.settings.kind} model on ${data.series.times.length} periods…`);
     // the engine counts epochs across the ensemble (network k starts at k × iterations)
-    const outcome = await progress.run({ type: 'train', series: data.series, settings: checked.settings, name: modelName }, (p) => {
+    const done = await trainAndSave(progress.run({ type: 'train', series: data.series, settings: checked.settings, name: modelName }, (p) => {
       if (p.what === 'network epochs' && p.loss !== undefined) chart.add(p.done, p.loss);
-    });
+    }), ctx.shelf, modelName, replacing);
     if (chart.points === 0 && checked.settings.kind !== 'linear') lossNote.textContent = 'This engine version reports no validation loss during training; the final validation MAE is shown below.';
-    if (outcome.type === 'cancelled') { message.info('Training cancelled. Nothing was saved.'); return; }
-    if (outcome.type === 'failed') { message.error(outcome.message); return; }
-    if (outcome.type !== 'trained') return;
-    const stored = parseStoredModel(outcome.text, 'the trained model');
-    const saved = await ctx.shelf.save(modelName, outcome.text, async () => true);
-    if (!saved) { message.info('The trained model was not saved.'); return; }
+    if (done.status === 'cancelled') { message.info('Training cancelled. Nothing was saved.'); return; }
+    if (done.status === 'failed') { message.error(done.message); return; }
+    if (done.status === 'not saved') { message.info('The trained model was not saved.'); return; }
+    const { stored } = done;
     await ctx.refreshModels();
     store.set({ selected: modelName });
     const v = stored.validation;
@@ -107,7 +107,7 @@ export function trainSection(ctx: PaneContext): HTMLElement {
       h('dt', { text: 'inputs that matter most' }), h('dd', { text: stored.importance.slice(0, 4).map((i) => `${i.group} +${fmt(i.increase)}`).join(', ') || 'n/a' }),
     ));
     for (const note of stored.notes) warnings.appendChild(h('li', { text: note }));
-    message.ok(`Trained in ${outcome.seconds.toFixed(1)} s and saved in this workbook as "${modelName}". Check it against the baselines next.`);
+    message.ok(`Trained in ${done.seconds.toFixed(1)} s and saved in this workbook as "${modelName}". Check it against the baselines next.`);
   }));
 
   store.subscribe((st, prev) => { if (st.busy !== prev.busy) train.disabled = Boolean(st.busy); });
