@@ -2,9 +2,10 @@ import { InputError, storedModelText } from '../../engine';
 import { writeWithConsent } from '../../host/safe-write';
 import type { PaneContext } from '../context';
 import { field, guarded, h, messageLine } from '../dom';
-import { appendToArchive, modelVersion } from '../logic/archive';
+import { modelVersion } from '../logic/archive';
 import { freezeRange } from '../logic/freeze';
-import { OUTLOOK_FRAME, OUTLOOK_SHEET, outlookLayout, type ScoreLine } from '../logic/outlook-layout';
+import { OUTLOOK_FRAME, OUTLOOK_SHEET, type ScoreLine } from '../logic/outlook-layout';
+import { refreshOutlook } from '../logic/refresh-outlook';
 import { formulaBlock, valuesBlock, type ScoredRow } from '../logic/place-layout';
 import { forecastTomorrow, rowsOfDay } from '../logic/tomorrow';
 import type { PaneState } from '../state';
@@ -58,17 +59,11 @@ export function placeSection(ctx: PaneContext): HTMLElement {
     const { rows, days } = forecastTomorrow(stored, data);
     const firstDay = rowsOfDay(rows, days[0], data.series.zone);
     const issuedAt = Math.floor(ctx.now() / 1000) * 1000; // whole seconds in the archive
-    const layout = outlookLayout({
+    const archived = await refreshOutlook(port, ask, {
       model: entry.name, coverage: stored.settings.coverage, issuedAt, zone: data.series.zone,
       rows: firstDay, data: data.layout, scores: scoreLines(st, entry.name),
-    });
-    await port.ensureSheet(OUTLOOK_SHEET);
-    const written = await writeWithConsent(port, ask, layout.frame, layout.values);
-    if (!written) { message.info('The Outlook sheet was left as it was; nothing was archived.'); return; }
-    await port.addLineChart(layout.chart.sheet, layout.chart.address, layout.chart.title);
-    const archived = await appendToArchive(port, {
-      issuedAt, model: entry.name, created: stored.createdAt, version: modelVersion(stored.version, storedModelText(stored)), zone: data.series.zone,
-    }, firstDay);
+    }, { model: entry.name, created: stored.createdAt, version: modelVersion(stored.version, storedModelText(stored)) });
+    if (!archived) { message.info('The Outlook sheet was left as it was; nothing was archived.'); return; }
     message.ok(`Outlook rebuilt for ${days[0]} (${firstDay.length} periods); the issued forecast was appended to ${archived}.`);
   }));
 
