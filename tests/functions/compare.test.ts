@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { compareForecasts } from '../../src/engine';
 import { compare } from '../../src/functions/compare';
 
-const col = (a: number[]) => a.map((v) => [v]);
+const col = <T,>(a: T[]) => a.map((v) => [v]);
 // the worked example of the engine's compareForecasts (src/engine/compare/compare-forecasts.ts): 3 days of 2 periods
 const actual = col([10, 20, 10, 20, 10, 20]);
 const a = col([11, 20, 10, 21, 12, 20]);

@@ -41,7 +41,7 @@ describe('readTimes', () => {
   it('readTimes reads text without an offset as wall-clock time, with the same autumn rule', () => {
     const t = readTimes(['2025-10-26 02:00', '2025-10-26T02:00', '2025-10-27'], BERLIN, 'times');
     expect(t).toEqual([Date.UTC(2025, 9, 26, 0), Date.UTC(2025, 9, 26, 1), Date.UTC(2025, 9, 26, 23)]);
-    expect(t[1] - t[0]).toBe(H);
+    expect(t[1]! - t[0]!).toBe(H);
   });
 
   it('readTimes gives undefined for an empty cell and refuses other text with its row', () => {
