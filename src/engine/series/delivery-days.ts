@@ -1,5 +1,8 @@
-import { dayLengthMinutes, toWallClock } from './local-clock';
+import { checkZone, dayLengthMinutes } from './local-clock';
+import { offsetLookup } from './zone-offsets';
 import type { Series } from './series';
+
+const DAY_MS = 86_400_000;
 
 /**
  * A delivery day: a local calendar day of the market zone, holding periods
@@ -23,18 +26,18 @@ export interface DeliveryDay {
 export function deliveryDays(series: Series): DeliveryDay[] {
   const days: DeliveryDay[] = [];
   const { times, zone, resolution } = series;
+  checkZone(zone);
+  const offsetAt = offsetLookup(zone);
   let current: DeliveryDay | undefined;
-  // Offsets only change on the hour: compute wall clocks once per UTC hour.
-  let hourKey = NaN, hourDate = '', hourMinutes = 0;
+  let dayNumber = NaN, date = '';
   for (let i = 0; i < times.length; i++) {
-    const hourStart = times[i] - (((times[i] % 3_600_000) + 3_600_000) % 3_600_000);
-    if (hourStart !== hourKey) {
-      const c = toWallClock(hourStart, zone);
-      hourKey = hourStart; hourDate = c.date; hourMinutes = c.minutes;
-    }
-    const minutes = hourMinutes + (times[i] - hourStart) / 60_000;
-    if (!current || current.date !== hourDate) {
-      current = { date: hourDate, start: i, count: 0, expected: dayLengthMinutes(hourDate, zone) / resolution, slots: [] };
+    // the local wall clock of the period's own start, read as a UTC date and time
+    const local = times[i] + offsetAt(times[i]) * 60_000;
+    const n = Math.floor(local / DAY_MS);
+    if (n !== dayNumber) { dayNumber = n; date = new Date(n * DAY_MS).toISOString().slice(0, 10); }
+    const minutes = (local - n * DAY_MS) / 60_000;
+    if (!current || current.date !== date) {
+      current = { date, start: i, count: 0, expected: dayLengthMinutes(date, zone) / resolution, slots: [] };
       days.push(current);
     }
     current.slots.push(Math.floor(minutes / resolution));
