@@ -3,6 +3,7 @@ import { inferResolution } from './infer-resolution';
 import { checkZone } from './local-clock';
 import { parseNumber } from './parse-number';
 import { parseTimestamp } from './parse-timestamp';
+import { quoteCell } from './quote-cell';
 import type { Series } from './series';
 import type { Table } from './table';
 
@@ -58,7 +59,10 @@ export function buildSeries(table: Table, options: BuildOptions): { series: Seri
   const seen = new Set<string>();
   header.forEach((h, c) => {
     if (h === '') throw new InputError(`column ${c + 1} of the header has no name`, { file, row: 1 });
-    if (seen.has(h.toLowerCase())) throw new InputError(`the header names column "${h}" twice`, { file, row: 1 });
+    if (/[\u0000-\u001f\u007f\u0085\u2028\u2029]/.test(h)) {
+      throw new InputError(`column ${c + 1} of the header, ${quoteCell(h)}, holds a line break or control character; rename it`, { file, row: 1 });
+    }
+    if (seen.has(h.toLowerCase())) throw new InputError(`the header names column ${quoteCell(h)} twice`, { file, row: 1 });
     seen.add(h.toLowerCase());
   });
   if (table.rows.length === 0) throw new InputError('the file has a header but no data rows', { file });
@@ -78,7 +82,7 @@ export function buildSeries(table: Table, options: BuildOptions): { series: Seri
   for (let i = 1; i < sorted.length; i++) {
     if (sorted[i].time === sorted[i - 1].time) {
       throw new InputError(
-        `timestamp ${table.rows[parsed.indexOf(sorted[i])][timeCol].trim()} appears twice (rows ${sorted[i - 1].row} and ${sorted[i].row}); keep one of them`,
+        `timestamp ${quoteCell(table.rows[parsed.indexOf(sorted[i])][timeCol])} appears twice (rows ${sorted[i - 1].row} and ${sorted[i].row}); keep one of them`,
         { file, row: Math.max(sorted[i - 1].row, sorted[i].row), column: header[timeCol] },
       );
     }
@@ -126,6 +130,5 @@ export function buildSeries(table: Table, options: BuildOptions): { series: Seri
 }
 
 function clipHeader(header: string[]): string {
-  const text = header.join(',');
-  return text.length > 60 ? `${text.slice(0, 60)}…` : text;
+  return quoteCell(header.join(','), 60);
 }

@@ -61,3 +61,11 @@ describe('buildSeries(table, options)', () => {
     expect(() => buildSeries(parseCsv('timestamp,price\n2025-01-01T00:00Z,1\n', 'f'), { zone: 'Mars/Olympus' })).toThrow(/IANA time zone/);
   });
 });
+
+describe('buildSeries(table, options) with line breaks in cells (found by tests/fuzz/csv-ingest)', () => {
+  it('keeps every message on one line when a quoted header holds a line break', () => {
+    expect(() => build('"time\nstamp",price\n2025-01-01T00:00Z,1\n')).toThrow(/^[^\n]*no "timestamp" column[^\n]*\\n[^\n]*$/);
+    expect(() => build('timestamp,price,"wind\r\nspeed"\n2025-01-01T00:00Z,1,2\n')).toThrow(/^[^\r\n]*line break[^\r\n]*$/);
+    expect(() => build('timestamp,price\n"2025-01-01T00:00\n+00:00",1\n2025-01-01T00:00Z,2\n')).toThrow(/^[^\n]*appears twice[^\n]*$/);
+  });
+});
