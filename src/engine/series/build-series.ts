@@ -7,6 +7,9 @@ import { quoteCell } from './quote-cell';
 import type { Series } from './series';
 import type { Table } from './table';
 
+// names that would reach an object's prototype machinery as keys of `drivers`
+const RESERVED = new Set(['__proto__', 'constructor', 'prototype']);
+
 export interface Gap {
   /** UTC ms of the first missing period */
   from: number;
@@ -62,6 +65,7 @@ export function buildSeries(table: Table, options: BuildOptions): { series: Seri
     if (/[\u0000-\u001f\u007f\u0085\u2028\u2029]/.test(h)) {
       throw new InputError(`column ${c + 1} of the header, ${quoteCell(h)}, holds a line break or control character; rename it`, { file, row: 1 });
     }
+    if (RESERVED.has(h)) throw new InputError(`column name ${quoteCell(h)} is reserved; rename the column`, { file, row: 1 });
     if (seen.has(h.toLowerCase())) throw new InputError(`the header names column ${quoteCell(h)} twice`, { file, row: 1 });
     seen.add(h.toLowerCase());
   });

@@ -62,7 +62,12 @@ describe('buildSeries(table, options)', () => {
   });
 });
 
-describe('buildSeries(table, options) with line breaks in cells (found by tests/fuzz/csv-ingest)', () => {
+describe('buildSeries(table, options) with hostile header names and line breaks in cells (found by tests/fuzz/csv-ingest)', () => {
+  it('refuses a column named __proto__, which vanished from the drivers (it set their prototype)', () => {
+    expect(() => build('timestamp,price,__proto__\n2025-01-01T00:00Z,1,2\n2025-01-01T01:00Z,1,2\n')).toThrow(/"__proto__" is reserved/);
+    expect(() => build('timestamp,price,constructor\n2025-01-01T00:00Z,1,2\n2025-01-01T01:00Z,1,2\n')).toThrow(/reserved/);
+  });
+
   it('keeps every message on one line when a quoted header holds a line break', () => {
     expect(() => build('"time\nstamp",price\n2025-01-01T00:00Z,1\n')).toThrow(/^[^\n]*no "timestamp" column[^\n]*\\n[^\n]*$/);
     expect(() => build('timestamp,price,"wind\r\nspeed"\n2025-01-01T00:00Z,1,2\n')).toThrow(/^[^\r\n]*line break[^\r\n]*$/);
