@@ -125,6 +125,7 @@ export default async function config(env = {}, argv = {}) {
 /** Development server: HTTPS with trusted localhost certificates, no injected client script. */
 async function devServer() {
   return {
+    host: 'localhost', // nothing is served beyond this machine
     port: ADDIN_PORT,
     server: { type: 'https', options: await httpsOptions() },
     headers: { 'Access-Control-Allow-Origin': '*' },
@@ -142,14 +143,21 @@ async function devServer() {
   };
 }
 
+/**
+ * Trusted localhost certificates from office-addin-dev-certs where it can
+ * install its CA into the system's trust store (Windows, macOS; it asks
+ * first). Elsewhere the browser keeps its own store, so the server uses a
+ * self-signed certificate that the user accepts once in the browser.
+ */
 async function httpsOptions() {
+  if (process.platform !== 'win32' && process.platform !== 'darwin') return {};
   try {
     const certs = await import('office-addin-dev-certs');
     return await (certs.default ?? certs).getHttpsServerOptions();
   } catch (err) {
     process.stderr.write(
       `Could not set up trusted localhost certificates (${err instanceof Error ? err.message : err}); ` +
-        'serving with a self-signed one: open https://localhost:3000/taskpane.html once in your browser and accept it.\n',
+        `serving with a self-signed one: open https://localhost:${ADDIN_PORT}/taskpane.html once in your browser and accept it.\n`,
     );
     return {};
   }
@@ -173,7 +181,7 @@ function announce() {
       '  2. Home > Add-ins > More Add-ins > My Add-ins > Upload My Add-in (or Manage My Add-ins > Upload);',
       `  3. choose ${manifest};`,
       '  4. open the Spotloom group on the Home tab and press "Open Spotloom".',
-      '  The browser must trust https://localhost:3000: open that address once and accept the certificate if asked.',
+      `  The server's certificate is self-signed: open https://localhost:${ADDIN_PORT}/taskpane.html once in that browser and accept it first.`,
     );
   }
   lines.push('Forecasts are estimates with stated error, not trading advice.', '');
