@@ -10,6 +10,9 @@ import type { Table } from './table';
 // names that would reach an object's prototype machinery as keys of `drivers`
 const RESERVED = new Set(['__proto__', 'constructor', 'prototype']);
 
+/** Most periods a series may span, gaps included: far beyond any real history, small enough to fit in memory. */
+export const MAX_PERIODS = 4_000_000;
+
 export interface Gap {
   /** UTC ms of the first missing period */
   from: number;
@@ -96,6 +99,13 @@ export function buildSeries(table: Table, options: BuildOptions): { series: Seri
   const step = resolution * 60_000;
   const t0 = sorted[0].time;
   const n = Math.round((sorted[sorted.length - 1].time - t0) / step) + 1;
+  if (n > MAX_PERIODS) {
+    const last = sorted[sorted.length - 1];
+    throw new InputError(
+      `the rows span ${n} periods of ${resolution} minutes, from row ${sorted[0].row} to row ${last.row}; Spotloom reads at most ${MAX_PERIODS} (over 100 years of quarter-hours): check those timestamps for a wrong year`,
+      { file, column: header[timeCol] },
+    );
+  }
   const times = Array.from({ length: n }, (_, i) => t0 + i * step);
   const price = new Array<number>(n).fill(NaN);
   const drivers: Record<string, number[]> = {};
