@@ -26,6 +26,8 @@ export interface MemoryWorkbookOptions {
   models?: Record<string, string>;
   /** value of a formula cell */
   evaluate?: (formula: string, at: { sheet: string; row: number; column: number }) => CellValue;
+  /** called by recalculate() */
+  onRecalculate?: () => void;
 }
 
 export interface RecordedChart {
@@ -42,6 +44,9 @@ interface Sheet {
 export class MemoryWorkbook implements WorkbookPort {
   readonly kind = 'memory';
   readonly charts: RecordedChart[] = [];
+  /** how often recalculate() was asked for (the preview re-evaluates its formula cells on it) */
+  recalculations = 0;
+  private readonly onRecalculate?: () => void;
   private readonly sheets: Sheet[] = [];
   private readonly models = new Map<string, string>();
   private readonly system: '1900' | '1904';
@@ -52,6 +57,7 @@ export class MemoryWorkbook implements WorkbookPort {
   constructor(options: MemoryWorkbookOptions = {}) {
     this.system = options.dateSystem ?? '1900';
     this.evaluate = options.evaluate;
+    this.onRecalculate = options.onRecalculate;
     for (const [name, grid] of Object.entries(options.sheets ?? {})) {
       const sheet = this.addSheet(name);
       grid.forEach((row, r) => row.forEach((v, c) => setCell(sheet, r, c, v)));
@@ -120,6 +126,11 @@ export class MemoryWorkbook implements WorkbookPort {
     const r = parseA1(address);
     const s = this.sheet(sheet);
     this.charts.push({ sheet: s.name, address: formatA1({ ...r, sheet: undefined }), title });
+  }
+
+  async recalculate(): Promise<void> {
+    this.recalculations++;
+    this.onRecalculate?.();
   }
 
   /**

@@ -94,15 +94,17 @@ export class ModelStore {
     if (from === to) return this.load(from);
     if (await this.has(to)) throw new InputError(`a model named "${to}" is already saved in this workbook; choose another name or delete that one first`);
     const { stored } = await this.load(from);
-    const renamed = await this.saveStored({ ...stored, name: to }, false);
+    const renamed = await this.saveStored({ ...stored, name: to }, false, undefined, false);
     await this.port.deleteModel(from);
     this.cache().delete(from);
+    await this.recalculate();
     return renamed;
   }
 
   async delete(name: string): Promise<void> {
     await this.port.deleteModel(name);
     this.cache().delete(name);
+    await this.recalculate();
   }
 
   /** Forgets the cached models (after the workbook changed behind our back). */
@@ -110,7 +112,7 @@ export class ModelStore {
     caches.delete(this.port);
   }
 
-  private async saveStored(stored: StoredModel, replace: boolean, learner?: Learner): Promise<LoadedModel> {
+  private async saveStored(stored: StoredModel, replace: boolean, learner?: Learner, recalculate = true): Promise<LoadedModel> {
     const text = storedModelText(stored);
     const checked = check(stored.name, text); // the text exactly as it will be read back
     if (!replace && (await this.has(stored.name))) {
@@ -119,7 +121,17 @@ export class ModelStore {
     await this.port.saveModel(stored.name, text);
     const loaded: LoadedModel = { name: stored.name, stored: checked.stored, learner: learner ?? checked.learner };
     this.cache().set(stored.name, Promise.resolve(loaded));
+    if (recalculate) await this.recalculate();
     return loaded;
+  }
+
+  /** LOOM cells follow the models: recalculate after every change (a failure here loses no model). */
+  private async recalculate(): Promise<void> {
+    try {
+      await this.port.recalculate?.();
+    } catch {
+      // the model is saved; the host recalculates on its own schedule
+    }
   }
 
   private cache(): Map<string, Promise<LoadedModel>> {

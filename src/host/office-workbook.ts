@@ -136,6 +136,13 @@ export class OfficeWorkbook implements WorkbookPort {
     });
   }
 
+  async recalculate(): Promise<void> {
+    await this.call('recalculating the workbook', async (context) => {
+      context.workbook.application.calculate('Full');
+      await context.sync();
+    });
+  }
+
   private async readProperty(address: string, property: 'values' | 'formulas'): Promise<CellValue[][]> {
     const r = parseA1(address);
     return this.call(`reading ${address}`, async (context) => {

@@ -37,6 +37,12 @@ export interface WorkbookPort {
   deleteModel(name: string): Promise<void>;
   /** a native line chart of the columns in `address` (first column: categories) */
   addLineChart(sheet: string, address: string, title: string): Promise<void>;
+  /**
+   * Recalculates the workbook's formulas, so that LOOM cells pick up a model
+   * that was saved, replaced, renamed or deleted (model-store.ts calls it).
+   * Optional: a port without it simply leaves recalculation to the host.
+   */
+  recalculate?(): Promise<void>;
 }
 
 /** Asks the user a yes/no question; the pane shows it as a dialog. */

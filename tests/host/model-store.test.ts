@@ -76,6 +76,15 @@ describe('ModelStore', () => {
     await expect(store.load('desk v2')).rejects.toThrow(InputError);
   });
 
+  it('save, rename and delete make the workbook recalculate, so LOOM cells follow the models', async () => {
+    const wb = new MemoryWorkbook();
+    const store = new ModelStore(wb);
+    await store.saveText(text(fixture().stored));
+    await store.rename('test-linear', 'b');
+    await store.delete('b');
+    expect(wb.recalculations).toBe(3);
+  });
+
   it('every hostile stored model is refused on load and listed with its problem', async () => {
     for (const [what, body, message] of hostile()) {
       const wb = new MemoryWorkbook({ models: { 'test-linear': body } });

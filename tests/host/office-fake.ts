@@ -23,11 +23,12 @@ export interface FakeExcel {
   parts: FakePart[];
   charts: { sheet: string; type: string; address: string; seriesBy: string; title: string }[];
   syncs: number;
+  calculations: string[];
   requests: { address: string; cells: number }[];
 }
 
 export function fakeExcel(init: { sheets?: Record<string, CellValue[][]>; parts?: FakePart[]; dateSystem?: '1900' | '1904'; selection?: string } = {}): FakeExcel {
-  const state: FakeExcel = { Excel: undefined, sheets: new Map(), parts: [...(init.parts ?? [])], charts: [], syncs: 0, requests: [] };
+  const state: FakeExcel = { Excel: undefined, sheets: new Map(), parts: [...(init.parts ?? [])], charts: [], syncs: 0, calculations: [], requests: [] };
   for (const [name, grid] of Object.entries(init.sheets ?? { Sheet1: [] })) {
     const cells = new Map<string, CellValue>();
     grid.forEach((row, r) => row.forEach((v, c) => v !== null && v !== '' && cells.set(`${r},${c}`, v)));
@@ -112,6 +113,7 @@ export function fakeExcel(init: { sheets?: Record<string, CellValue[][]>; parts?
         add: (name: string) => atSync.push(() => state.sheets.set(name, new Map())),
       },
       customXmlParts: parts,
+      application: { calculate: (type: string) => atSync.push(() => state.calculations.push(type)) },
     },
     sync: async () => {
       state.syncs++;

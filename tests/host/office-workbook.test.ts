@@ -97,6 +97,15 @@ describe('OfficeWorkbook (office-addin-mock)', () => {
     expect(listed.problem).toMatch(/not a valid Spotloom model/);
   });
 
+  it('recalculate asks the host for a full recalculation, and the model store uses it after a save', async () => {
+    const fake = fakeExcel();
+    const wb = connect(fake);
+    await wb.recalculate();
+    expect(fake.calculations).toEqual(['Full']);
+    await new ModelStore(wb).saveText(storedModelText(fixture().stored));
+    expect(fake.calculations).toEqual(['Full', 'Full']);
+  });
+
   it('addLineChart adds a line chart of the columns with a title', async () => {
     const fake = fakeExcel({ sheets: { Outlook: [] } });
     await connect(fake).addLineChart('Outlook', 'Outlook!A1:C26', 'Tomorrow');
