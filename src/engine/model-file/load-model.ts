@@ -66,8 +66,16 @@ export function learnerFromStored(stored: StoredModel, source = 'the model'): Le
     linear: stored.linear.map((l, k) => ({ window: l.window, lambda: l.lambda, weights: floats(l.weights, 4, (p + 1) * m, `linear.${k}.weights`) })),
     networks,
     targetRange: { lo: floats(stored.targetRange.lo, 8, m, 'targetRange.lo'), hi: floats(stored.targetRange.hi, 8, m, 'targetRange.hi') },
+    networkTarget: stored.networkTarget,
     neuralWeight: stored.neuralWeight,
-    residuals: { keep: stored.residuals.keep, bySlot: stored.residuals.bySlot.map((r) => [...r]) },
+    residuals: {
+      keep: stored.residuals.keep,
+      bySlot: stored.residuals.bySlot.map((r, k) => {
+        const v = decodeFloats(r, 4);
+        if (!v || v.length > stored.residuals.keep || !v.every(Number.isFinite)) return bad(`residuals of slot ${k + 1} are not valid`);
+        return Array.from(v);
+      }),
+    },
     validation: { ...stored.validation, maeNeural: stored.validation.maeNeural ?? NaN, maeNaiveWeek: stored.validation.maeNaiveWeek ?? NaN },
     importance: stored.importance,
     trainedFrom: stored.trainedFrom,

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from '../schema-config';
 import { ALL_FEATURE_GROUPS, type FeatureGroup } from '../features/feature-groups';
 import { LearnerSettingsSchema } from '../models/learner-settings';
 import { BASE64 } from './base64-floats';
@@ -46,8 +46,9 @@ export const StoredModelSchema = z.strictObject({
     biases: z.array(Floats).max(6),
   })).max(10),
   targetRange: z.strictObject({ lo: Floats, hi: Floats }),
+  networkTarget: z.enum(['prices', 'linear-residuals']),
   neuralWeight: Finite.min(0).max(1),
-  residuals: z.strictObject({ keep: z.number().int().min(1).max(1000), bySlot: z.array(z.array(Finite).max(1000)).max(96) }),
+  residuals: z.strictObject({ keep: z.number().int().min(1).max(1000), bySlot: z.array(Floats).max(96) }),
   validation: z.strictObject({
     days: z.number().int().min(0), mae: Finite, maeLinear: Finite, maeNeural: Finite.nullable(), maeNaiveWeek: Finite.nullable(),
   }),

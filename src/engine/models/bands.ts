@@ -16,7 +16,8 @@ export function emptyPool(slots: number, keep: number): ResidualPool {
 
 export function addResiduals(pool: ResidualPool, actual: ArrayLike<number>, forecast: ArrayLike<number>, scale: number): void {
   pool.bySlot.forEach((list, s) => {
-    const r = (actual[s] - forecast[s]) / scale;
+    // 32-bit, like the stored model keeps them, so a loaded model bands exactly alike
+    const r = Math.fround((actual[s] - forecast[s]) / scale);
     if (!Number.isFinite(r)) return;
     list.push(r);
     if (list.length > pool.keep) list.shift();

@@ -7,8 +7,9 @@ export interface DayForecast {
   upper?: Float64Array;
 }
 
+/** Progress of long work; `value` carries a measured number when there is one (a network's validation loss). */
 export interface Progress {
-  (done: number, total: number, what: string): void;
+  (done: number, total: number, what: string, value?: number): void;
 }
 
 /**

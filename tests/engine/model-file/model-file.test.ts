@@ -53,7 +53,8 @@ describe('parseStoredModel(text) refuses what does not match the schema', () => 
     ['a driver named __proto__', variant((m) => { m.setup.drivers = ['__proto__']; }), /reserved name|drivers/],
     ['a weight array of the wrong size', variant((m) => { m.linear[0].weights = 'AAAAAA=='; }), /linear.0.weights has the wrong size/],
     ['NaN network weights', variant((m) => { m.networks[0].biases[0] = nanWeights; }), /not a finite number|wrong size/],
-    ['a gigantic array', variant((m) => { m.residuals.bySlot = Array.from({ length: 24 }, () => new Array(5000).fill(0)); }), /residuals|2 MB/],
+    ['a gigantic array', variant((m) => { m.residuals.bySlot = Array.from({ length: 200 }, () => 'AAAAAA=='); }), /residuals/],
+    ['too many errors for a slot', variant((m) => { m.residuals.bySlot[0] = 'AAAAAAAA'.repeat(200); }), /residuals of slot 1/],
     ['an over-size string', variant((m) => { m.notes = ['x'.repeat(5000)]; }), /notes/],
     ['more than 2 MB', ' '.repeat(2 * 1024 * 1024 + 1), /2 MB/],
   ])('refuses %s', (_what, bad, message) => {
