@@ -66,7 +66,6 @@ export function learnerFromStored(stored: StoredModel, source = 'the model'): Le
     linear: stored.linear.map((l, k) => ({ window: l.window, lambda: l.lambda, weights: floats(l.weights, 4, (p + 1) * m, `linear.${k}.weights`) })),
     networks,
     targetRange: { lo: floats(stored.targetRange.lo, 8, m, 'targetRange.lo'), hi: floats(stored.targetRange.hi, 8, m, 'targetRange.hi') },
-    networkTarget: stored.networkTarget,
     neuralWeight: stored.neuralWeight,
     residuals: {
       keep: stored.residuals.keep,

@@ -46,7 +46,6 @@ export const StoredModelSchema = z.strictObject({
     biases: z.array(Floats).max(6),
   })).max(10),
   targetRange: z.strictObject({ lo: Floats, hi: Floats }),
-  networkTarget: z.enum(['prices', 'linear-residuals']),
   neuralWeight: Finite.min(0).max(1),
   residuals: z.strictObject({ keep: z.number().int().min(1).max(1000), bySlot: z.array(Floats).max(96) }),
   validation: z.strictObject({

@@ -38,7 +38,6 @@ export function toStoredModel(learner: Learner, meta: { name: string; zone: stri
       biases: n.layers.slice(1).map((l) => encodeFloats(l.biases, 4)),
     })),
     targetRange: { lo: f64(state.targetRange.lo), hi: f64(state.targetRange.hi) },
-    networkTarget: state.networkTarget,
     neuralWeight: state.neuralWeight,
     residuals: { keep: state.residuals.keep, bySlot: state.residuals.bySlot.map((r) => encodeFloats(r, 4)) },
     validation: {

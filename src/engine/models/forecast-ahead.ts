@@ -35,7 +35,12 @@ export function forecastAhead(model: DayAheadModel, series: Series, drivers: str
   if (known < lastDay.expected) {
     notes.push(`${lastKnown}, the last day with prices, has ${known} of ${lastDay.expected}; its other periods take the same period of the day before`);
   }
-  if (first >= frame.days.length || !hasDrivers(frame.drivers, drivers, first, frame.days[first].count)) {
+  // judge the drivers on the raw rows: the input frame fills unknown values from earlier days
+  const given = (d: number) => drivers.every((n) => {
+    const day = frame.days[d];
+    return n in full.drivers && full.drivers[n].slice(day.start, day.start + day.count).some((v) => !Number.isNaN(v));
+  });
+  if (first >= frame.days.length || !given(first)) {
     throw new InputError(
       `the forecast for ${addDays(lastKnown, 1)} needs its rows: timestamps of that day with ${drivers.join(', ')} filled in and price left empty`,
     );
@@ -43,7 +48,7 @@ export function forecastAhead(model: DayAheadModel, series: Series, drivers: str
   const rows: AheadRow[] = [];
   const days: string[] = [];
   for (let d = first; d < frame.days.length; d++) {
-    if (d > first && !(drivers.length && hasDrivers(frame.drivers, drivers, d, frame.days[d].count))) break;
+    if (d > first && !(drivers.length && given(d))) break;
     const f = model.predict(frameBefore(frame, d));
     const day = frame.days[d];
     const point = expandDay(day, f.point);
@@ -57,10 +62,6 @@ export function forecastAhead(model: DayAheadModel, series: Series, drivers: str
   }
   if (days.length > 1) notes.push(`${days.slice(1).join(', ')} use the forecasts of the days before them as their price history`);
   return { rows, days, notes };
-}
-
-function hasDrivers(drivers: Record<string, Float64Array[]>, names: string[], d: number, _count: number): boolean {
-  return names.every((n) => drivers[n]?.[d] && !drivers[n][d].every(Number.isNaN));
 }
 
 /** The series with empty rows for the local day after its last period's day (for models without drivers). */

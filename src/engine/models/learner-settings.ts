@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from '../schema-config';
 import { ALL_FEATURE_GROUPS, type FeatureGroup } from '../features/feature-groups';
 import { DEFAULT_NETWORK_OPTIONS, NetworkOptionsSchema } from './network-options';
 

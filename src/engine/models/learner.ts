@@ -12,6 +12,7 @@ import { advanceMember, fitLinearEnsemble, linearPrice, windowOf, type LinearMem
 import { ridgeGram } from './ridge';
 import { fitStandardiser, standardise, type Standardiser } from './standardiser';
 import { FeatureCache, type TrainingDay } from './training-days';
+import { fitUnitRange, fromUnit, toUnit, type UnitRange } from './unit-range';
 
 /** What a fitted learner knows; model-file.ts stores exactly this. */
 export interface LearnerState {
@@ -21,8 +22,8 @@ export interface LearnerState {
   /** ridge models on several calibration windows (linear-ensemble.ts) */
   linear: LinearMember[];
   networks: NetworkJson[];
-  /** affine map of scaled targets into the sigmoid's (0, 1): y01 = 0.1 + 0.8 (z − lo) / (hi − lo) */
-  targetRange: { lo: Float64Array; hi: Float64Array };
+  /** map of the networks' targets into the sigmoid's (0, 1) (unit-range.ts) */
+  targetRange: UnitRange;
   /** weight of the network ensemble in the blend (1 = neural only, 0 = linear only) */
   neuralWeight: number;
   residuals: ResidualPool;
@@ -90,10 +91,9 @@ export class Learner implements DayAheadModel {
     progress?.(1, 1, 'linear model');
 
     // neural part: an ensemble of seeds, early-stopped on validation MAE
-    const { lo, hi } = targetRange(train);
-    const toUnit = (z: Float64Array) => z.map((v, k) => 0.1 + (0.8 * (v - lo[k])) / (hi[k] - lo[k]));
-    const fromUnit = (u: Float64Array) => u.map((v, k) => lo[k] + ((v - 0.1) * (hi[k] - lo[k])) / 0.8);
-    const samples = train.map((d) => ({ input: standardise(d.x, standardiser), output: toUnit(d.y!) }));
+    const range = fitUnitRange(train.map((d) => d.y!));
+    const samples = train.map((d) => ({ input: standardise(d.x, standardiser), output: toUnit(d.y!, range) }));
+    const networkScaled = (run: (x: Float64Array) => Float64Array, input: Float64Array) => fromUnit(run(input), range);
     const valInputs = val.map((d) => standardise(d.x, standardiser));
     const networks: NetworkJson[] = [];
     const valNets: ((x: Float64Array) => Float64Array)[] = [];
@@ -102,12 +102,12 @@ export class Learner implements DayAheadModel {
       const sums = val.map(() => new Float64Array(m));
       const total = s.network.ensemble * s.network.iterations;
       for (let k = 0; k < s.network.ensemble; k++) {
-        const loss = (run: (x: Float64Array) => Float64Array) => maeOn(val.map((d, i) => priceOf(d, fromUnit(run(valInputs[i])))));
-        const { json } = trainNetwork(samples, s.network, s.seed * 101 + k, loss, (epoch) => progress?.(k * s.network.iterations + epoch, total, 'network epochs'));
+        const loss = (run: (x: Float64Array) => Float64Array) => maeOn(val.map((d, i) => priceOf(d, networkScaled(run, valInputs[i]))));
+        const { json } = trainNetwork(samples, s.network, s.seed * 101 + k, loss, (epoch, loss) => progress?.(k * s.network.iterations + epoch, total, 'network epochs', loss));
         networks.push(json);
         const run = loadNetwork(json);
         valNets.push(run);
-        val.forEach((d, i) => { const z = fromUnit(run(valInputs[i])); for (let c = 0; c < m; c++) sums[i][c] += z[c]; });
+        val.forEach((d, i) => { const z = networkScaled(run, valInputs[i]); for (let c = 0; c < m; c++) sums[i][c] += z[c]; });
       }
       nnVal = val.map((d, i) => priceOf(d, sums[i].map((v) => v / s.network.ensemble)));
     }
@@ -127,7 +127,7 @@ export class Learner implements DayAheadModel {
       if (networks.length === 0 || neuralWeight === 0) return lin;
       const input = standardise(x, standardiser);
       const sum = new Float64Array(m);
-      for (const run of valNets) { const z = fromUnit(run(input)); for (let c = 0; c < m; c++) sum[c] += z[c]; }
+      for (const run of valNets) { const z = networkScaled(run, input); for (let c = 0; c < m; c++) sum[c] += z[c]; }
       return mix([priceOf(d, sum.map((v) => v / valNets.length))], [lin], neuralWeight)[0];
     }, (preds) => maeOn(preds));
     progress?.(1, 1, 'feature importance');
@@ -137,7 +137,7 @@ export class Learner implements DayAheadModel {
     const state: LearnerState = {
       setup, notes, standardiser,
       linear: linear.members,
-      networks, targetRange: { lo, hi }, neuralWeight, residuals,
+      networks, targetRange: range, neuralWeight, residuals,
       validation: {
         days: vDays, mae: maeOn(combined), maeLinear: maeOn(linVal), maeNeural: nnVal.length ? maeOn(nnVal) : NaN,
         maeNaiveWeek: maeOn(val.map((d) => view.price[d.day - 7])),
@@ -177,11 +177,7 @@ export class Learner implements DayAheadModel {
     state.trainedTo = view.days[view.price.length - 1].date;
     if (this.settings.kind !== 'linear' && this.settings.warmEpochs > 0) {
       const all = cache.trainingDays(view, 0, view.price.length);
-      const { lo, hi } = state.targetRange;
-      const samples = all.map((d) => ({
-        input: standardise(d.x, state.standardiser),
-        output: d.y!.map((v, k) => Math.min(0.98, Math.max(0.02, 0.1 + (0.8 * (v - lo[k])) / (hi[k] - lo[k])))),
-      }));
+      const samples = all.map((d) => ({ input: standardise(d.x, state.standardiser), output: toUnit(d.y!, state.targetRange) }));
       const warm = { ...this.settings.network, iterations: this.settings.warmEpochs, checkEvery: this.settings.warmEpochs, patience: 1 };
       state.networks = state.networks.map((json, k) =>
         trainNetwork(samples, warm, this.settings.seed * 101 + k + view.price.length * 7919, () => 0, undefined, json).json);
@@ -196,11 +192,10 @@ export class Learner implements DayAheadModel {
     const lin = linearPrice(state.linear, state.standardiser, x, m, scale);
     if (this.nets.length === 0) return lin;
     const input = standardise(x, state.standardiser);
-    const { lo, hi } = state.targetRange;
     const sum = new Float64Array(m);
     for (const run of this.nets) {
-      const u = run(input);
-      for (let c = 0; c < m; c++) sum[c] += lo[c] + ((u[c] - 0.1) * (hi[c] - lo[c])) / 0.8;
+      const z = fromUnit(run(input), state.targetRange);
+      for (let c = 0; c < m; c++) sum[c] += z[c];
     }
     const nn = sum.map((z) => fromScaled(z / this.nets.length, scale));
     return mix([nn], [lin], state.neuralWeight)[0];
@@ -302,18 +297,6 @@ function chooseSetup(view: DayFrame, s: LearnerSettings): { setup: FeatureSetup;
     driverStats[name] = { mean, sd };
   }
   return { setup: { groups, drivers, driverStats, region: s.region, scaleWindow: s.scaleWindow, slots: view.slots }, notes };
-}
-
-function targetRange(days: TrainingDay[]): { lo: Float64Array; hi: Float64Array } {
-  const m = days[0].y!.length;
-  const lo = new Float64Array(m).fill(Infinity);
-  const hi = new Float64Array(m).fill(-Infinity);
-  for (const d of days) d.y!.forEach((v, k) => { lo[k] = Math.min(lo[k], v); hi[k] = Math.max(hi[k], v); });
-  for (let k = 0; k < m; k++) {
-    const pad = Math.max(0.25 * (hi[k] - lo[k]), 0.5);
-    lo[k] -= pad; hi[k] += pad;
-  }
-  return { lo, hi };
 }
 
 function mix(a: Float64Array[], b: Float64Array[], wa: number): Float64Array[] {

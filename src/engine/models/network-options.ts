@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from '../schema-config';
 
 /**
  * Training settings of the neural network, checked with a plain message

@@ -26,10 +26,16 @@ export function dayStartUtc(date: string, zone: string): number {
   return DateTime.fromISO(date, { zone }).startOf('day').toMillis();
 }
 
-/** Length of local day `date` in minutes: 1380, 1440 or 1500 on DST change days. */
+/**
+ * Length of local day `date` in minutes: 1440, or 1380 and 1500 on the EU
+ * and US change days (other zones shift by other amounts, e.g. Lord Howe's
+ * 30 minutes). Measured between the starts of the day and the next one, so
+ * a day whose midnight the clocks skip (it starts at 01:00) counts right.
+ */
 export function dayLengthMinutes(date: string, zone: string): number {
   const start = DateTime.fromISO(date, { zone }).startOf('day');
-  return (start.plus({ days: 1 }).toMillis() - start.toMillis()) / 60_000;
+  const next = start.plus({ days: 1 }).startOf('day');
+  return (next.toMillis() - start.toMillis()) / 60_000;
 }
 
 /**

@@ -23,20 +23,28 @@ export interface Table {
 export function parseCsv(text: string, source: string): Table {
   const clean = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   const parsed = Papa.parse<string[]>(clean, { delimiter: ',', skipEmptyLines: false });
-  const lines = parsed.data;
-  let first = lines.findIndex((cells) => !isBlank(cells));
+  const records = parsed.data;
+  // a quoted cell may hold line breaks: count them so row numbers stay file lines
+  const lineOf: number[] = [];
+  let line = 1;
+  for (const cells of records) {
+    lineOf.push(line);
+    line += 1;
+    for (const c of cells) for (let k = c.indexOf('\n'); k >= 0; k = c.indexOf('\n', k + 1)) line++;
+  }
+  const first = records.findIndex((cells) => !isBlank(cells));
   if (first < 0) throw new InputError('the file is empty; it needs a header row and data rows', { file: source });
-  const header = lines[first].map((h) => h.trim());
+  const header = records[first].map((h) => h.trim());
   const rows: string[][] = [];
   const rowNumbers: number[] = [];
-  for (let i = first + 1; i < lines.length; i++) {
-    const cells = lines[i];
+  for (let i = first + 1; i < records.length; i++) {
+    const cells = records[i];
     if (isBlank(cells)) continue;
     if (cells.length !== header.length) {
-      throw new InputError(`has ${cells.length} cells but the header has ${header.length}`, { file: source, row: i + 1 });
+      throw new InputError(`has ${cells.length} cells but the header has ${header.length}`, { file: source, row: lineOf[i] });
     }
     rows.push(cells);
-    rowNumbers.push(i + 1);
+    rowNumbers.push(lineOf[i]);
   }
   return { source, header, rows, rowNumbers };
 }

@@ -61,7 +61,7 @@ describe('dayStartUtc(date, zone) and dayLengthMinutes(date, zone)', () => {
   // BUG (reported to the lead): for a day that begins after a skipped midnight, dayLengthMinutes adds one
   // calendar day to 01:00 and so measures to 01:00 of the next day: 1440 instead of 1380
   // (America/Santiago 2025-09-07, America/Havana 2025-03-09). deliveryDays then expects 24 periods on a 23-hour day.
-  it.skip('gives 1380 minutes for a day whose midnight the clocks skip', () => {
+  it('gives 1380 minutes for a day whose midnight the clocks skip', () => {
     expect(dayLengthMinutes('2025-09-07', 'America/Santiago')).toBe(1380);
     expect(dayLengthMinutes('2025-03-09', 'America/Havana')).toBe(1380);
   });
