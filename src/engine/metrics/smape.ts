@@ -20,8 +20,11 @@ export function smape(actual: readonly number[], forecast: readonly number[]): n
   const [a, f] = validRows('sMAPE', ['actual', 'forecast'], [actual, forecast]);
   let sum = 0;
   for (let i = 0; i < a.length; i++) {
-    const scale = Math.abs(a[i]) + Math.abs(f[i]);
-    if (scale > 0) sum += (2 * Math.abs(f[i] - a[i])) / scale;
+    let scale = Math.abs(a[i]) + Math.abs(f[i]);
+    let diff = Math.abs(f[i] - a[i]);
+    // near 1e308 these overflow: the halves give the same ratio
+    if (scale === Infinity) { scale = Math.abs(a[i] / 2) + Math.abs(f[i] / 2); diff = Math.abs(f[i] / 2 - a[i] / 2); }
+    if (scale > 0) sum += 2 * (diff / scale);
   }
   return (100 * sum) / a.length;
 }

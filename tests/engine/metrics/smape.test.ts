@@ -30,3 +30,14 @@ describe('smape(actual, forecast)', () => {
     expect(() => smape([NaN], [1])).toThrow('sMAPE requires at least 1 pair of actual and forecast values');
   });
 });
+
+describe('smape(actual, forecast) near the largest doubles (found by tests/fuzz/metrics)', () => {
+  test('smape([1e308], [1.7e308]) is 2 * 0.7 / 2.7, not 0 (|A| + |F| overflowed to Infinity)', () => {
+    expect(smape([1e308], [1.7e308])).toBeCloseTo((100 * 2 * 0.7) / 2.7, 10);
+    expect(smape([-1.5e308], [1.5e308])).toBeCloseTo(200, 12);
+  });
+
+  test('a subnormal forecast against 0 is still 200 %', () => {
+    expect(smape([0], [-5e-324])).toBe(200);
+  });
+});
