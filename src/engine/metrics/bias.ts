@@ -1,3 +1,4 @@
+import { finiteScore } from './finite-score';
 import { validRows } from './valid-rows';
 
 /**
@@ -9,7 +10,8 @@ import { validRows } from './valid-rows';
  * @param actual - observed prices
  * @param forecast - forecast prices, same length as `actual`
  * @returns the mean forecast error F - A, in the unit of the prices
- * @throws {InputError} on different lengths, ±Infinity, or no complete pair
+ * @throws {InputError} on different lengths, ±Infinity, no complete pair, or a
+ *   result that overflows (finite-score.ts)
  * @example bias([10, 20], [12, 21]) // 1.5 (forecast 1.5 too high)
  * Source: Hyndman & Koehler (2006), Int. J. Forecasting 22(4) (ME, sign flipped).
  */
@@ -17,5 +19,5 @@ export function bias(actual: readonly number[], forecast: readonly number[]): nu
   const [a, f] = validRows('bias', ['actual', 'forecast'], [actual, forecast]);
   let sum = 0;
   for (let i = 0; i < a.length; i++) sum += f[i] - a[i];
-  return sum / a.length;
+  return finiteScore('bias', sum / a.length);
 }

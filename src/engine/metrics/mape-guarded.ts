@@ -1,4 +1,5 @@
 import { InputError } from '../errors';
+import { finiteScore } from './finite-score';
 import { validRows } from './valid-rows';
 
 export interface MapeOptions {
@@ -27,7 +28,8 @@ export interface MapeResult {
  * @param options - `minAbsActual`, a positive number (default 1)
  * @returns `{ value, used, skipped }`
  * @throws {InputError} on different lengths, ±Infinity, no complete pair, a
- *   bad `minAbsActual`, or when every complete pair fails the guard
+ *   bad `minAbsActual`, when every complete pair fails the guard, or a result
+ *   that overflows (finite-score.ts)
  * @example mapeGuarded([100, 0.2, -50], [90, 5, -40]) // { value: 15, used: 2, skipped: 1 }
  * Source: Hyndman & Koehler (2006), Int. J. Forecasting 22(4);
  * the guard is ours (common practice: report how many periods it removed).
@@ -53,5 +55,5 @@ export function mapeGuarded(
       `MAPE requires at least 1 actual value with |actual| >= ${minAbsActual} (all ${a.length} are closer to zero); use sMAPE or MAE for prices near zero`,
     );
   }
-  return { value: (100 * sum) / used, used, skipped: a.length - used };
+  return { value: finiteScore('MAPE', (100 * sum) / used), used, skipped: a.length - used };
 }

@@ -1,4 +1,5 @@
 import { InputError } from '../errors';
+import { finiteScore } from './finite-score';
 
 /**
  * The MASE scale: the in-sample mean absolute error of the seasonal naive
@@ -9,7 +10,7 @@ import { InputError } from '../errors';
  * @param season - seasonal period in periods (1 = naive; 24 = one day of hours)
  * @returns the scale, in the unit of the prices
  * @throws {InputError} on a season that is not a whole number >= 1, ±Infinity,
- *   no complete pair `season` apart, or a scale of 0
+ *   no complete pair `season` apart, a scale of 0, or one that overflows
  * @example maseScale([1, 3, 2, 6], 2) // 2 (= (|2-1| + |6-3|) / 2)
  * Source: Hyndman & Koehler (2006), Int. J. Forecasting 22(4),
  * seasonal form as in R forecast::accuracy().
@@ -39,5 +40,5 @@ export function maseScale(series: readonly number[], season: number): number {
       `MASE is undefined: the in-sample series repeats exactly every ${season} periods, so the scale is 0; use MAE or rMAE`,
     );
   }
-  return sum / count;
+  return finiteScore('MASE scale', sum / count);
 }

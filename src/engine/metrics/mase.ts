@@ -1,3 +1,4 @@
+import { finiteScore } from './finite-score';
 import { mae } from './mae';
 import { maseScale } from './mase-scale';
 
@@ -12,7 +13,7 @@ import { maseScale } from './mase-scale';
  * @param insample - the series that sets the scale (e.g. the training span)
  * @param season - seasonal period in periods (1 = naive)
  * @returns the MASE (unit-free)
- * @throws {InputError} as `mae` and `maseScale`
+ * @throws {InputError} as `mae` and `maseScale`, and a ratio that overflows
  * @example mase([4, 6], [5, 5], [1, 3, 2, 6], 2) // 0.5 (= MAE 1 / scale 2)
  * Source: Hyndman & Koehler (2006), Int. J. Forecasting 22(4).
  */
@@ -23,5 +24,5 @@ export function mase(
   season: number,
 ): number {
   const scale = maseScale(insample, season);
-  return mae(actual, forecast) / scale;
+  return finiteScore('MASE', mae(actual, forecast) / scale);
 }

@@ -1,4 +1,5 @@
 import { InputError } from '../errors';
+import { finiteScore } from './finite-score';
 import { validRows } from './valid-rows';
 
 /**
@@ -11,7 +12,7 @@ import { validRows } from './valid-rows';
  * @param tau - quantile level, strictly between 0 and 1
  * @returns the mean pinball loss, in the unit of the prices
  * @throws {InputError} on tau outside (0, 1), different lengths, ±Infinity,
- *   or no complete pair
+ *   no complete pair, or a result that overflows (finite-score.ts)
  * @example pinball([10, 10], [8, 13], 0.9) // 1.05 (= (0.9*2 + 0.1*3) / 2)
  * Source: Koenker & Bassett (1978), "Regression quantiles", Econometrica
  * 46(1); Gneiting & Raftery (2007), JASA 102(477).
@@ -30,5 +31,5 @@ export function pinball(
     const u = a[i] - q[i];
     sum += u >= 0 ? tau * u : (tau - 1) * u;
   }
-  return sum / a.length;
+  return finiteScore('pinball loss', sum / a.length);
 }

@@ -1,4 +1,5 @@
 import { InputError } from '../errors';
+import { finiteScore } from './finite-score';
 import { validRows } from './valid-rows';
 
 /**
@@ -12,7 +13,7 @@ import { validRows } from './valid-rows';
  * @param reference - reference forecast prices; all three of the same length
  * @returns the rMAE (unit-free)
  * @throws {InputError} on different lengths, ±Infinity, no complete period, or
- *   a reference with zero error
+ *   a reference with zero error, or sums or a ratio that overflow (finite-score.ts)
  * @example rmae([10, 20], [11, 19], [12, 22]) // 0.5
  * Source: Lago, Marcjasz, De Schutter & Weron (2021), "Forecasting day-ahead
  * electricity prices: a review of state-of-the-art algorithms, best practices
@@ -30,8 +31,10 @@ export function rmae(
     forecastSum += Math.abs(f[i] - a[i]);
     referenceSum += Math.abs(r[i] - a[i]);
   }
+  finiteScore('rMAE', forecastSum);
+  finiteScore('rMAE', referenceSum);
   if (referenceSum === 0) {
     throw new InputError('rMAE is undefined: the reference forecast has no error on these periods; use MAE');
   }
-  return forecastSum / referenceSum;
+  return finiteScore('rMAE', forecastSum / referenceSum);
 }
