@@ -43,11 +43,15 @@ export function dieboldMariano(
   lossDiff: readonly number[],
   { h = 1 }: DieboldMarianoOptions = {},
 ): DieboldMarianoResult {
-  const d = lossDiff.filter((v) => !Number.isNaN(v));
-  const bad = d.find((v) => !Number.isFinite(v));
+  const raw = lossDiff.filter((v) => !Number.isNaN(v));
+  const bad = raw.find((v) => !Number.isFinite(v));
   if (bad !== undefined) {
     throw new InputError(`Diebold–Mariano test: a loss difference is ${bad}; give finite numbers, or NaN for unknown`);
   }
+  // The statistic does not depend on the unit of d: divided by a power of two
+  // (exact) the largest |d| is about 1, so squares neither overflow nor underflow.
+  const unit = powerOfTwoBelow(raw.reduce((m, v) => Math.max(m, Math.abs(v)), 0));
+  const d = raw.map((v) => v / unit);
   const n = d.length;
   if (n < 2) {
     throw new InputError(`Diebold–Mariano test requires at least 2 loss differences (got ${n})`);
@@ -55,10 +59,10 @@ export function dieboldMariano(
   if (!(Number.isInteger(h) && h >= 1 && h <= n - 1)) {
     throw new InputError(`Diebold–Mariano test: h must be a whole number from 1 to ${n - 1} (got ${h})`);
   }
-  if (d.every((v) => v === d[0])) {
-    if (d[0] === 0) return { statistic: 0, pValue: 0.5, n };
+  if (raw.every((v) => v === raw[0])) {
+    if (raw[0] === 0) return { statistic: 0, pValue: 0.5, n };
     throw new InputError(
-      `Diebold–Mariano test is undefined: the loss difference is ${d[0]} in every period, so its variance is 0`,
+      `Diebold–Mariano test is undefined: the loss difference is ${raw[0]} in every period, so its variance is 0`,
     );
   }
   const mean = d.reduce((s, v) => s + v, 0) / n;
@@ -78,4 +82,12 @@ function autocovariance(d: readonly number[], mean: number, lag: number): number
   let sum = 0;
   for (let t = lag; t < d.length; t++) sum += (d[t] - mean) * (d[t - lag] - mean);
   return sum / d.length;
+}
+
+/** The largest power of two not above m (1 for m = 0), finite for every finite m. */
+function powerOfTwoBelow(m: number): number {
+  if (m === 0) return 1;
+  let e = Math.min(1023, Math.floor(Math.log2(m)));
+  if (2 ** e > m) e--; // log2 can round up just below a power of two
+  return 2 ** e;
 }

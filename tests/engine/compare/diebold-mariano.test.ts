@@ -71,3 +71,18 @@ describe('dieboldMariano(lossDiff, { h })', () => {
     expect(() => dieboldMariano([1, Infinity, 3])).toThrow(InputError);
   });
 });
+
+describe('dieboldMariano(lossDiff) at the ends of the double range (found by tests/fuzz/compare)', () => {
+  const d = [-1, -2, 0.5, -1.5];
+  test('loss differences of 1e200 give the same statistic as the same numbers in units (squares overflowed: statistic 0, p 0.5)', () => {
+    const base = dieboldMariano(d);
+    const big = dieboldMariano(d.map((v) => v * 1e200));
+    expect(big.statistic).toBeCloseTo(base.statistic, 10);
+    expect(big.pValue).toBeCloseTo(base.pValue, 10);
+  });
+
+  test('tiny loss differences are tested, not refused (squares underflowed to a zero variance)', () => {
+    expect(dieboldMariano(d.map((v) => v * 1e-300)).statistic).toBeCloseTo(dieboldMariano(d).statistic, 10);
+    expect(dieboldMariano([0, -5e-324]).n).toBe(2);
+  });
+});
