@@ -23,7 +23,8 @@ export interface DailyLossDifferential {
  * @param loss - `'abs'` (|F - A|, daily MAE) or `'squared'` ((F - A)^2, daily MSE)
  * @returns `{ days, diff }`, sorted by day
  * @throws {InputError} on different lengths, ±Infinity, a day index that is
- *   not a whole number, an unknown loss, or no complete period
+ *   not a whole number, an unknown loss, no complete period, or losses that
+ *   overflow
  * @example dailyLossDifferential([1, 2, 3], [1, 3, 3], [2, 2, 2], [0, 0, 1], 'abs').diff // [0, -1]
  * Source: Lago, Marcjasz, De Schutter & Weron (2021), "Forecasting day-ahead
  * electricity prices: a review of state-of-the-art algorithms, best practices
@@ -64,6 +65,11 @@ export function dailyLossDifferential(
   }
   if (sums.size === 0) {
     throw new InputError('forecast comparison requires at least 1 period where actual, forecast A and forecast B are all known');
+  }
+  for (const [day, { sum }] of sums) {
+    if (!Number.isFinite(sum)) {
+      throw new InputError(`forecast comparison: the losses of day ${day} are too large to compute (beyond ±1.8e308); check the units of the values`);
+    }
   }
   const days = [...sums.keys()].sort((x, y) => x - y);
   return { days, diff: days.map((day) => sums.get(day)!.sum / sums.get(day)!.count) };

@@ -1,4 +1,5 @@
 import { describe, expect, test } from 'vitest';
+import { compareForecasts } from '../../../src/engine/compare/compare-forecasts';
 import { dailyLossDifferential } from '../../../src/engine/compare/daily-loss-differential';
 import { InputError } from '../../../src/engine/errors';
 
@@ -57,5 +58,18 @@ describe('dailyLossDifferential(actual, a, b, dayOf, loss)', () => {
     );
     expect(() => dailyLossDifferential([1], [Infinity], [1], [0], 'abs')).toThrow(InputError);
     expect(() => dailyLossDifferential([NaN], [1], [1], [0], 'abs')).toThrow(/at least 1 period/);
+  });
+});
+
+describe('dailyLossDifferential with losses that overflow (found by tests/fuzz/compare)', () => {
+  test('refuses instead of handing on a NaN day (squared errors of 1e200 gave Infinity - Infinity)', () => {
+    const f = () => dailyLossDifferential([1e200, 0], [0, 1], [0, 2], [0, 1], 'squared');
+    expect(f).toThrow(InputError);
+    expect(f).toThrow(/losses of day 0 are too large/);
+    expect(() => compareForecasts([1e200, 0, 0], [0, 1, 1], [0, 2, 3], [0, 1, 2], 'squared')).toThrow(/too large/);
+  });
+
+  test('absolute losses of the same values still work', () => {
+    expect(dailyLossDifferential([1e200, 0], [0, 1], [0, 2], [0, 1], 'abs').diff).toEqual([0, -1]);
   });
 });
