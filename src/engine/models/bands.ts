@@ -35,10 +35,14 @@ export function band(pool: ResidualPool, point: Float64Array, scale: number, cov
   const upper = new Float64Array(slots);
   const reach = Math.max(1, Math.round(slots / 24));
   for (let s = 0; s < slots; s++) {
-    const near: number[] = [];
-    for (let k = -reach; k <= reach; k++) near.push(...(pool.bySlot[(s + k + slots) % slots] ?? []));
-    if (near.length < 5) { lower[s] = NaN; upper[s] = NaN; continue; }
-    near.sort((a, b) => a - b);
+    let n = 0;
+    for (let k = -reach; k <= reach; k++) n += pool.bySlot[(s + k + slots) % slots]?.length ?? 0;
+    if (n < 5) { lower[s] = NaN; upper[s] = NaN; continue; }
+    // a typed array sorts numerically and fast: this runs for every slot of every forecast
+    const near = new Float64Array(n);
+    let i = 0;
+    for (let k = -reach; k <= reach; k++) for (const r of pool.bySlot[(s + k + slots) % slots] ?? []) near[i++] = r;
+    near.sort();
     lower[s] = point[s] + scale * quantile(near, (1 - coverage) / 2);
     upper[s] = point[s] + scale * quantile(near, (1 + coverage) / 2);
   }
@@ -46,7 +50,7 @@ export function band(pool: ResidualPool, point: Float64Array, scale: number, cov
 }
 
 /** Quantile of sorted values, linear interpolation between order statistics (Hyndman & Fan 1996, type 7). */
-export function quantile(sorted: number[], q: number): number {
+export function quantile(sorted: ArrayLike<number>, q: number): number {
   const h = (sorted.length - 1) * q;
   const lo = Math.floor(h);
   const hi = Math.min(sorted.length - 1, lo + 1);
