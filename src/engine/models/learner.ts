@@ -36,6 +36,8 @@ export interface LearnerState {
 }
 
 const MIN_TRAINING_DAYS = 56;
+/** days between warm starts of the networks during updates (they cost far more than the linear part) */
+const NETWORK_REFRESH_DAYS = 7;
 
 /**
  * The learned day-ahead model: averaged ridge models and an ensemble of brain.js
@@ -51,6 +53,8 @@ export class Learner implements DayAheadModel {
   private sums?: MemberSums[];
   private nets: ((x: Float64Array) => Float64Array)[] = [];
   private readonly issued = new Map<number, { point: Float64Array; scale: number }>();
+  /** day index of the networks' last warm start (or fit) */
+  private lastWarm?: number;
 
   constructor(settings: LearnerSettings, state?: LearnerState) {
     const checked = LearnerSettingsSchema.safeParse(settings);
@@ -64,8 +68,9 @@ export class Learner implements DayAheadModel {
     return MIN_TRAINING_DAYS + this.settings.scaleWindow;
   }
 
+  /** The linear part takes in every new day; the networks' warm start is rationed (NETWORK_REFRESH_DAYS). */
   get defaultRetrainEvery(): number {
-    return this.settings.kind === 'linear' ? 1 : 7;
+    return this.settings.kind === 'neural' ? NETWORK_REFRESH_DAYS : 1;
   }
 
   fit(view: DayFrame, progress?: Progress): void {
@@ -147,6 +152,7 @@ export class Learner implements DayAheadModel {
       trainedTo: view.days[view.price.length - 1].date,
     };
     this.adopt(state, cache, linear.sums);
+    this.lastWarm = view.price.length;
   }
 
   predict(view: DayFrame): DayForecast {
@@ -175,7 +181,9 @@ export class Learner implements DayAheadModel {
     const sums = this.linearSums(view, from);
     state.linear.forEach((member, k) => advanceMember(member, sums[k], fresh, state.standardiser));
     state.trainedTo = view.days[view.price.length - 1].date;
-    if (this.settings.kind !== 'linear' && this.settings.warmEpochs > 0) {
+    const sinceWarm = this.lastWarm === undefined ? Infinity : view.price.length - this.lastWarm;
+    if (this.settings.kind !== 'linear' && this.settings.warmEpochs > 0 && sinceWarm >= NETWORK_REFRESH_DAYS) {
+      this.lastWarm = view.price.length;
       const all = cache.trainingDays(view, 0, view.price.length);
       const samples = all.map((d) => ({ input: standardise(d.x, state.standardiser), output: toUnit(d.y!, state.targetRange) }));
       const warm = { ...this.settings.network, iterations: this.settings.warmEpochs, checkEvery: this.settings.warmEpochs, patience: 1 };
