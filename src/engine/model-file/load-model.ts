@@ -40,6 +40,8 @@ export function learnerFromStored(stored: StoredModel, source = 'the model'): Le
     if (!v.every(Number.isFinite)) return bad(`${what} holds a value that is not a finite number`);
     return v;
   };
+  // training keeps every standard deviation above 1e-9 (standardiser.ts); a smaller one divides by (almost) zero
+  const positive = (v: Float64Array, what: string) => (v.every((x) => x > 1e-9) ? v : bad(`${what} holds a value of 1e-9 or less`));
   if (stored.setup.drivers.length !== stored.setup.driverStats.length || stored.setup.driverStats.some((d, i) => d.name !== stored.setup.drivers[i])) {
     bad('setup.driverStats does not match setup.drivers');
   }
@@ -62,7 +64,7 @@ export function learnerFromStored(stored: StoredModel, source = 'the model'): Le
   const state: LearnerState = {
     setup: { ...stored.setup, driverStats },
     notes: stored.notes,
-    standardiser: { mean: floats(stored.standardiser.mean, 8, p, 'standardiser.mean'), sd: floats(stored.standardiser.sd, 8, p, 'standardiser.sd') },
+    standardiser: { mean: floats(stored.standardiser.mean, 8, p, 'standardiser.mean'), sd: positive(floats(stored.standardiser.sd, 8, p, 'standardiser.sd'), 'standardiser.sd') },
     linear: stored.linear.map((l, k) => ({ window: l.window, lambda: l.lambda, weights: floats(l.weights, 4, (p + 1) * m, `linear.${k}.weights`) })),
     networks,
     targetRange: { lo: floats(stored.targetRange.lo, 8, m, 'targetRange.lo'), hi: floats(stored.targetRange.hi, 8, m, 'targetRange.hi') },

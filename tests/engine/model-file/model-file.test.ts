@@ -3,6 +3,7 @@ import {
   createModel, forecastAhead, inputFrame, Learner, learnerFromStored, parseStoredModel, storedModelText, toStoredModel,
   type ModelOptions, type Series,
 } from '../../../src/engine';
+import { decodeFloats, encodeFloats } from '../../../src/engine/model-file/base64-floats';
 import { syntheticSeries } from '../../support/synthetic';
 
 const SMALL: ModelOptions = { seed: 2, network: { hiddenLayers: [5], learningRate: 0.05, momentum: 0.5, iterations: 10, ensemble: 2, checkEvery: 5, patience: 2 } };
@@ -60,5 +61,15 @@ describe('parseStoredModel(text) refuses what does not match the schema', () => 
   ])('refuses %s', (_what, bad, message) => {
     expect(() => learnerFromStored(parseStoredModel(bad))).toThrow(message);
     expect(({} as Record<string, unknown>).polluted).toBeUndefined();
+  });
+});
+
+describe('learnerFromStored(stored) refuses standard deviations training never writes (found by tests/fuzz/model-file)', () => {
+  const { text } = trained('linear');
+  it.each([0, 1e-12, -1])('refuses standardiser.sd of %s (zeros gave NaN forecasts for every hour)', (sd) => {
+    const m = JSON.parse(text);
+    const count = decodeFloats(m.standardiser.sd, 8)!.length;
+    m.standardiser.sd = encodeFloats(new Array(count).fill(sd), 8);
+    expect(() => learnerFromStored(parseStoredModel(JSON.stringify(m)))).toThrow(/standardiser.sd holds a value of 1e-9 or less/);
   });
 });
