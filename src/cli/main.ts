@@ -21,6 +21,8 @@ export async function main(argv: string[]): Promise<number> {
     .showHelpAfterError('(spotloom --help lists the commands)');
 
   const zone = () => new Option('--tz <zone>', 'market time zone (IANA)').default('Europe/Berlin');
+  const missing = () => new Option('--missing <rule>', 'prices missing inside the history: fill (same period of the nearest earlier day) or fail')
+    .choices(['fill', 'fail']).default('fill');
   addModelFlags(program.command('backtest')
     .description('walk forward through a test span, forecasting each day from data before it')
     .requiredOption('--input <file>', 'CSV with timestamp, price and driver columns')
@@ -28,7 +30,7 @@ export async function main(argv: string[]): Promise<number> {
     .option('--test-end <date>', 'last delivery day to forecast (YYYY-MM-DD)')
     .addOption(new Option('--model <name>', 'model').choices(MODELS).default('blend'))
     .option('--retrain-every <days>', 'refresh the model every this many days (0 = never; default 1 for linear, 7 for blend and neural)')
-    .addOption(zone())
+    .addOption(zone()).addOption(missing())
     .option('--out <file>', 'write timestamp,forecast,lower,upper,actual')
     .option('--json', 'print one JSON summary on stdout'))
     .action(async (o) => backtestCommand(o));
@@ -39,7 +41,7 @@ export async function main(argv: string[]): Promise<number> {
     .option('--until <date>', 'train on delivery days before this date (YYYY-MM-DD)')
     .requiredOption('--save <file>', 'model file to write (JSON)')
     .addOption(new Option('--model <name>', 'model').choices(['blend', 'neural', 'linear']).default('blend'))
-    .addOption(zone())
+    .addOption(zone()).addOption(missing())
     .option('--json', 'print one JSON summary on stdout'))
     .action(async (o) => trainCommand(o));
 

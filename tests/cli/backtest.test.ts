@@ -48,4 +48,17 @@ describe('spotloom backtest', () => {
     expect(runCli(['backtest', '--input', f, '--test-start', '2025-03-31', '--model', 'oracle']).status).toBe(2);
     expect(runCli(['backtest', '--input', f, '--test-start', '2025-03-31', '--retrain-every', 'x', '--model', 'naive-day']).stderr).toMatch(/--retrain-every must be a whole number/);
   });
+
+  it('--missing fail refuses a history with a missing price; the default fills it and says so', () => {
+    const dir = scratch();
+    const lines = readFileSync(file(dir), 'utf8').split('\n');
+    lines[100] = lines[100].replace(/,[\d.]+,/, ',,');
+    const f = writeFile(dir, 'gappy.csv', lines.join('\n'));
+    const fail = runCli(['backtest', '--input', f, '--test-start', '2025-03-31', '--model', 'naive-week', '--missing', 'fail']);
+    expect(fail.status).toBe(2);
+    expect(fail.stderr).toMatch(/1 periods inside the history have no price, the first at 2025-03-14T03:00:00\+01:00/);
+    const fill = runCli(['backtest', '--input', f, '--test-start', '2025-03-31', '--model', 'naive-week']);
+    expect(fill.status).toBe(0);
+    expect(fill.stderr).toMatch(/1 periods have no price; model inputs take the same period of the nearest earlier day/);
+  });
 });

@@ -11,6 +11,7 @@ export interface BacktestFlags extends ModelFlags {
   model: string;
   retrainEvery?: string;
   tz: string;
+  missing?: string;
   out?: string;
   json?: boolean;
 }
@@ -18,7 +19,7 @@ export interface BacktestFlags extends ModelFlags {
 export async function backtestCommand(flags: BacktestFlags): Promise<void> {
   const model = createModel(flags.model, modelOptions(flags));
   const retrainEvery = intOption(flags.retrainEvery, '--retrain-every', 0, model.defaultRetrainEvery ?? 0);
-  const { series } = loadSeries(flags.input, flags.tz);
+  const { series } = loadSeries(flags.input, flags.tz, 'price', flags.missing);
   const frame = inputFrame(series);
   const { rows, summary } = runBacktest(model, frame, series, {
     testStart: flags.testStart, testEnd: flags.testEnd, retrainEvery, progress: stderrProgress('backtest'),

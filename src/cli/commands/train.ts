@@ -13,13 +13,14 @@ export interface TrainFlags extends ModelFlags {
   save: string;
   model: string;
   tz: string;
+  missing?: string;
   json?: boolean;
 }
 
 export async function trainCommand(flags: TrainFlags): Promise<void> {
   const model = createModel(flags.model, modelOptions(flags));
   if (!(model instanceof Learner)) throw new InputError(`--model ${flags.model} has nothing to train`);
-  const { series } = loadSeries(flags.input, flags.tz);
+  const { series } = loadSeries(flags.input, flags.tz, 'price', flags.missing);
   const frame = inputFrame(series);
   let view = frame;
   if (flags.until !== undefined) {
