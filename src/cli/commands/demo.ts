@@ -1,6 +1,5 @@
-import { mkdirSync } from 'node:fs';
+import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { writeFileSync } from 'node:fs';
 import {
   buildSeries, createModel, DEMO_MARKET, generateMarket, inputFrame, parseCsv, runBacktest, toCsv, type BacktestSummary,
 } from '../../engine';
@@ -10,12 +9,13 @@ export interface DemoFlags {
   out: string;
 }
 
-const DEMO_MODELS = ['naive-day', 'naive-week', 'weekday-rule'];
-const TEST_DAYS = 91;
+const DEMO_MODELS = ['naive-day', 'naive-week', 'weekday-rule', 'linear', 'blend'];
+const TEST_DAYS = 28;
 
 /**
  * The invented scenario end to end: writes the demo market's CSV, then
- * backtests each model on its last quarter and prints the scores.
+ * backtests the baselines and the learned models on its last four weeks
+ * and prints the scores.
  */
 export async function demoCommand(flags: DemoFlags): Promise<void> {
   mkdirSync(flags.out, { recursive: true });
@@ -38,6 +38,6 @@ export async function demoCommand(flags: DemoFlags): Promise<void> {
   for (const r of results) {
     process.stdout.write(`${r.model.padEnd(14)}${[r.mae, r.rmse, r.smape, r.rmae].map((v) => v.toFixed(3).padStart(10)).join('')}\n`);
   }
-  process.stdout.write(`Try it yourself: npx spotloom backtest --input ${file} --test-start ${testStart} --model naive-week\n`);
+  process.stdout.write(`Try it yourself: npx spotloom backtest --input ${file} --test-start ${testStart} --region ${DEMO_MARKET.region} --json\n`);
   process.stdout.write('Forecasts are estimates with stated error, not trading advice; check them against your desk\'s risk rules and the market\'s own rules.\n');
 }
