@@ -1,4 +1,4 @@
-import { DEMO_MARKET, generateMarket, type DemoRow } from '../engine';
+import { DEMO_MARKET, generateMarket, InputError, type DemoRow } from '../engine';
 import type { CellValue } from '../host/workbook-port';
 
 /**
@@ -16,9 +16,10 @@ import type { CellValue } from '../host/workbook-port';
  *   and beside it (columns H–N) every LOOM function at work on History;
  * - Forecast: an empty sheet with a note, for the pane's Place section.
  *
- * @param options.days delivery days with prices (default 400)
+ * @param options.days delivery days with prices (default 400, at least MIN_DAYS)
  * @param options.rows the market's rows (default generateMarket(DEMO_MARKET, 1))
- * @example demoWorkbook().ranges.times // 'History!A1:A9625'
+ * @throws InputError for fewer than MIN_DAYS days
+ * @example demoWorkbook().ranges.times // 'History!A1:A9626'
  */
 export interface DemoWorkbook {
   sheets: Record<string, CellValue[][]>;
@@ -42,10 +43,13 @@ export const DEMO_DAYS = 400;
 export const SCORE_DAYS = 28;
 export const DEMO_SEED = 1;
 export const MODEL_NAME = 'main';
+/** the scored window, the week before it, and a day */
+export const MIN_DAYS = SCORE_DAYS + 8;
 const DRIVERS = ['temperature_forecast', 'load_forecast'] as const;
 
 export function demoWorkbook(options: { days?: number; rows?: DemoRow[] } = {}): DemoWorkbook {
   const days = options.days ?? DEMO_DAYS;
+  if (!Number.isInteger(days) || days < MIN_DAYS) throw new InputError(`the demo workbook needs at least ${MIN_DAYS} days (the scored window and its week before), got ${days}`);
   const all = options.rows ?? generateMarket(DEMO_MARKET, DEMO_SEED);
   const dates = [...new Set(all.map((r) => r.timestamp.slice(0, 10)))];
   const tomorrow = dates[dates.length - 1];

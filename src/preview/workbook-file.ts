@@ -50,6 +50,8 @@ export interface KeyValueStorage {
 
 export const FILE_PREFIX = 'spotloom-preview/v1/';
 const PARTS = ['models', 'sheets', 'blocks', 'charts'] as const;
+/** names that would reach an object's prototype rather than name a model (the model schema refuses them too) */
+const UNSAFE_KEYS = new Set(['__proto__', 'constructor', 'prototype']);
 type Part = (typeof PARTS)[number];
 
 export class WorkbookFile {
@@ -59,7 +61,9 @@ export class WorkbookFile {
     const models: Record<string, string> = {};
     const stored = this.part('models');
     if (isRecord(stored)) {
-      for (const [name, text] of Object.entries(stored)) if (typeof text === 'string') models[name] = text;
+      for (const [name, text] of Object.entries(stored)) {
+        if (typeof text === 'string' && !UNSAFE_KEYS.has(name)) models[name] = text;
+      }
     }
     const sheets = asArray(this.part('sheets')).filter((s): s is string => typeof s === 'string');
     const blocks = asArray(this.part('blocks')).filter(isBlock);

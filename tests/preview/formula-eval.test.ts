@@ -1,0 +1,107 @@
+import { describe, expect, it } from 'vitest';
+import { mae, rmae } from '../../src/engine';
+import type { CellValue } from '../../src/host/workbook-port';
+import { calculate, Failure, type CellSource, type FormulaCell, type ResultCache } from '../../src/preview/formula-eval';
+import { LOOM_FUNCTIONS, type LoomFunction } from '../../src/preview/loom-functions';
+
+/** A workbook of sheets (each grid from A1) as the evaluator reads it, with version numbers for the cache. */
+function source(sheets: Record<string, CellValue[][]>, versions: Record<string, number> = {}, models = { v: 0 }): CellSource {
+  const find = (name: string) => Object.keys(sheets).find((s) => s.toLowerCase() === name.toLowerCase());
+  return {
+    sheetName: find,
+    raw: (sheet, row, column) => {
+      const v = sheets[find(sheet)!]?.[row]?.[column];
+      return v === null || v === undefined || v === '' ? undefined : v;
+    },
+    formulas: () => Object.entries(sheets).flatMap(([sheet, grid]) => grid.flatMap((line, row) => line.flatMap((v, column): FormulaCell[] =>
+      typeof v === 'string' && v.startsWith('=') ? [{ sheet, row, column, formula: v }] : []))),
+    version: (sheet) => versions[sheet.toLowerCase()] ?? 0,
+    modelsVersion: () => models.v,
+  };
+}
+
+const calls: string[] = [];
+/** Small stand-in functions: SEQ(n) spills 1..n down, SUM adds a range, FAIL throws the host's error shape. */
+const FAKE: Record<string, LoomFunction> = {
+  SEQ: { call: (async (n: number) => { calls.push('SEQ'); return Array.from({ length: n }, (_, i) => [i + 1]); }) as never, params: ['scalar'], required: 1 },
+  SUM: { call: (async (g: CellValue[][]) => { calls.push('SUM'); return g.flat().reduce<number>((a, v) => a + (typeof v === 'number' ? v : 0), 0); }) as never, params: ['matrix'], required: 1 },
+  FAIL: { call: (async () => { throw Object.assign(new Error('bad input here'), { code: '#VALUE!' }); }) as never, params: [], required: 0 },
+  NAMED: { call: (async () => { calls.push('NAMED'); return 'model answer'; }) as never, params: [], required: 0, readsModels: true },
+};
+
+describe('calculate(source, functions, cache)', () => {
+  it('a plain reference gives the cell, a range spills into the empty cells beside it', async () => {
+    const calc = await calculate(source({ S: [[1, 2, '=A1', '=A1:B2'], [3, 4]] }), FAKE);
+    expect(calc.result('S', 0, 2)).toEqual({ value: 1 });
+    expect(calc.result('S', 0, 3)).toEqual({ value: 1, spill: { rows: 2, columns: 2 } });
+    expect([calc.spilled('S', 0, 4), calc.spilled('S', 1, 3), calc.spilled('S', 1, 4)]).toEqual([2, 3, 4]);
+    expect(calc.touches('s')).toBe(true);
+  });
+
+  it('a reference reads a spill computed later in sheet order (formulas that could spill into it go first)', async () => {
+    const calc = await calculate(source({ S: [['=LOOM.SUM(C3:C5)'], [], [null, null, '=LOOM.SEQ(3)']] }), FAKE);
+    expect(calc.result('S', 0, 0)?.value).toBe(1 + 2 + 3);
+  });
+
+  it('a spill onto a written cell shows #SPILL! and spills nothing', async () => {
+    const calc = await calculate(source({ S: [['=LOOM.SEQ(3)'], [], ['taken']] }), FAKE);
+    expect(calc.result('S', 0, 0)?.error?.code).toBe('#SPILL!');
+    expect(calc.result('S', 0, 0)?.error?.message).toMatch(/needs A1:A3 .* but A3 is not empty/);
+    expect(calc.spilled('S', 1, 0)).toBeUndefined();
+  });
+
+  it('errors: the function\'s own error value and message, #NAME? for unknown names, #REF! for a cycle or a missing sheet, passed on by references', async () => {
+    const calc = await calculate(source({ S: [['=LOOM.FAIL()', '=A1', '=LOOM.NOPE(1)', '=D1', '=Nope!A1', '=SUM(A1)']] }), FAKE);
+    expect(calc.result('S', 0, 0)?.error).toEqual({ code: '#VALUE!', message: 'bad input here' });
+    expect(calc.result('S', 0, 1)?.error?.code).toBe('#VALUE!');
+    expect(calc.result('S', 0, 1)?.error?.message).toMatch(/^S!A1 shows #VALUE!/);
+    expect(calc.result('S', 0, 2)?.error?.code).toBe('#NAME?');
+    expect(calc.result('S', 0, 3)?.error).toMatchObject({ code: '#REF!', message: expect.stringMatching(/circular/) });
+    expect(calc.result('S', 0, 4)?.error?.message).toMatch(/sheet "Nope"/);
+    expect(calc.result('S', 0, 5)?.error?.code).toBe('#NAME?');
+  });
+
+  it('argument checks: too many, a missing required one, a range where one cell belongs', async () => {
+    const calc = await calculate(source({ S: [['=LOOM.SEQ(1, 2)', '=LOOM.SUM()', '=LOOM.SEQ(A2:A3)'], [1], [2]] }), FAKE);
+    expect(calc.result('S', 0, 0)?.error?.message).toMatch(/takes at most 1 arguments, got 2/);
+    expect(calc.result('S', 0, 1)?.error?.message).toMatch(/needs at least 1 arguments/);
+    expect(calc.result('S', 0, 2)?.error?.message).toMatch(/must be one cell or value, not 2 × 1 cells/);
+  });
+
+  it('LOOM.SCORE through the real cell function equals the engine\'s MAE and rMAE; an empty cell is skipped as unknown', async () => {
+    const actual = [10, 12, null, 15, 9], forecast = [11, 12, 13, 13, 10], reference = [9, 14, 11, 15, 12];
+    const sheet: CellValue[][] = actual.map((a, i) => [a, forecast[i], reference[i]]);
+    sheet[0].push('=LOOM.SCORE(A1:A5, B1:B5, "MAE")', '=LOOM.SCORE(A1:A5, B1:B5, "RMAE", C1:C5)', '=LOOM.SCORE(A1:A5, B1:B5, "nope")');
+    const calc = await calculate(source({ S: sheet }), LOOM_FUNCTIONS);
+    const nan = (xs: (number | null)[]) => xs.map((x) => (x === null ? NaN : x));
+    expect(calc.result('S', 0, 3)?.value).toBeCloseTo(mae(nan(actual), forecast), 12);
+    expect(calc.result('S', 0, 4)?.value).toBeCloseTo(rmae(nan(actual), forecast, reference), 12);
+    expect(calc.result('S', 0, 5)?.error).toMatchObject({ code: '#VALUE!', message: expect.stringMatching(/unknown metric "NOPE"/) });
+  });
+
+  it('with a cache, a formula is computed again only when a sheet it read (or, for model readers, the models) changed', async () => {
+    const cache: ResultCache = new Map();
+    const versions: Record<string, number> = { s: 1, other: 1 };
+    const models = { v: 0 };
+    const sheets = { S: [[1, 2, '=LOOM.SUM(A1:B1)', '=LOOM.NAMED()']], Other: [[5]] };
+    calls.length = 0;
+    await calculate(source(sheets, versions, models), FAKE, cache);
+    await calculate(source(sheets, versions, models), FAKE, cache);
+    expect(calls).toEqual(['SUM', 'NAMED']);
+    versions.other = 2; // not read by either
+    await calculate(source(sheets, versions, models), FAKE, cache);
+    expect(calls).toEqual(['SUM', 'NAMED']);
+    models.v = 1;
+    await calculate(source(sheets, versions, models), FAKE, cache);
+    expect(calls).toEqual(['SUM', 'NAMED', 'NAMED']);
+    versions.s = 2;
+    const calc = await calculate(source({ S: [[4, 2, '=LOOM.SUM(A1:B1)', '=LOOM.NAMED()']], Other: [[5]] }, versions, models), FAKE, cache);
+    expect(calls).toEqual(['SUM', 'NAMED', 'NAMED', 'SUM', 'NAMED']);
+    expect(calc.result('S', 0, 2)?.value).toBe(6);
+  });
+
+  it('Failure carries the error value it shows', () => {
+    const f = new Failure('#NUM!', 'too big');
+    expect([f.code, f.message]).toEqual(['#NUM!', 'too big']);
+  });
+});
