@@ -16,7 +16,7 @@ describe('completeCustomFunctions(scope)', () => {
     const scope = { CustomFunctions: { Error: own, ErrorCode: { invalidValue: 'X' } } };
     completeCustomFunctions(scope);
     expect(scope.CustomFunctions.Error).toBe(own);
-    const none: { CustomFunctions?: unknown } = {};
+    const none: { CustomFunctions?: { Error?: unknown } } = {};
     completeCustomFunctions(none);
     expect(none.CustomFunctions).toBeUndefined();
   });
