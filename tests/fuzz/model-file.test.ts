@@ -40,15 +40,8 @@ beforeAll(() => {
 const protoKeys = () => Object.getOwnPropertyNames(Object.prototype).sort().join();
 const protoBefore = protoKeys();
 
-/**
- * KNOWN OPEN (src/engine/models, reported to the lead): a loaded model whose
- * stored statistics or weights are extreme (e.g. setup.driverStats[0].mean =
- * 1e300) forecasts ±Infinity, because nothing bounds the linear part before
- * the inverse asinh. Until that is fixed such cases are tallied, not failed;
- * SPOTLOOM_FUZZ_STRICT=1 fails them, and the pinned reproducer below is an
- * `it.fails` that turns red once the fix lands (then drop the tolerance).
- */
-const STRICT = process.env.SPOTLOOM_FUZZ_STRICT === '1';
+/** A loaded model that forecasts ±Infinity fails the fuzz rule (the engine refuses such forecasts). */
+const STRICT = true;
 
 /** The fuzz rule for one model text: refused, or loaded and forecasting finite numbers. */
 function checkModelText(text: string): 'refused' | 'refused at forecast' | 'forecast' | 'non-finite' {
@@ -170,10 +163,10 @@ describe('parseStoredModel + learnerFromStored on untrusted text', () => {
   });
 });
 
-describe('KNOWN OPEN: extreme stored statistics reach the forecast (src/engine/models)', () => {
-  // Reproducer for the lead: a linear model file with setup.driverStats[0].mean = 1e300 loads
-  // (the schema asks only for a finite number) and forecasts -Infinity for every hour.
-  it.fails('a model with driverStats[0].mean = 1e300 is refused or forecasts finite numbers', () => {
+describe('extreme stored statistics never reach a forecast', () => {
+  // A linear model file with setup.driverStats[0].mean = 1e300 loads (the schema asks only for a
+  // finite number); it used to forecast -Infinity for every hour and is now refused at forecast.
+  it('a model with driverStats[0].mean = 1e300 is refused or forecasts finite numbers', () => {
     const m = JSON.parse(files.linear);
     m.setup.driverStats[0].mean = 1e300;
     const loaded = learnerFromStored(parseStoredModel(JSON.stringify(m)));

@@ -166,8 +166,13 @@ export class Learner implements DayAheadModel {
     const f = this.featureCache().features(view, d);
     if (!f) throw new InputError(`cannot forecast ${view.days[d].date}: it needs ${historyNeeded(state.setup)} days of known prices before it`);
     const point = this.pointForecast(f.x, f.scale);
-    this.recordIssued(view, d, point, f.scale.scale);
     const { lower, upper } = band(state.residuals, point, f.scale.scale, this.settings.coverage);
+    // a damaged or hand-edited model, or inputs far outside anything trained on, can overflow sinh
+    const infinite = (v: number) => v === Infinity || v === -Infinity;
+    if (!point.every(Number.isFinite) || lower.some(infinite) || upper.some(infinite)) {
+      throw new InputError(`model ${this.name} gave a forecast for ${view.days[d].date} that is not a finite number; its inputs or the stored model are far out of range`);
+    }
+    this.recordIssued(view, d, point, f.scale.scale);
     return { point, lower, upper };
   }
 
