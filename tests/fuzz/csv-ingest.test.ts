@@ -123,16 +123,23 @@ function render(p: Plan) {
       const numberCols = r.cells.map((_, c) => c).filter((c) => c !== timeCol);
       r.cells[numberCols[p.garbage.column % numberCols.length]] = p.garbage.number;
     } else r.cells.push('1');
+    // a row left with only empty cells is a blank line, which is skipped (table.ts)
+    if (r.cells.every((c) => c.trim() === '')) { rows.splice(p.garbage.at % rows.length, 1); garbageKind = undefined; }
   }
 
   const eol = p.crlf ? '\r\n' : '\n';
   const lines = [names.map((n) => quote(n, p.quoteAll)).join(',')];
   const placed: Row[] = [];
+  // row numbers are file lines: line breaks inside quoted cells count too
+  const breaks = (t: string) => t.split('\n').length - 1;
+  let line = 1 + breaks(lines[0]);
   rows.forEach((r, i) => {
-    if (p.blank.includes(i)) lines.push(p.spaces ? ' ' : '');
+    if (p.blank.includes(i)) { lines.push(p.spaces ? ' ' : ''); line++; }
     const cells = r.cells.map((c) => quote(p.spaces ? ` ${c} ` : c, p.quoteAll));
     lines.push(cells.join(','));
-    placed.push({ ...r, line: lines.length });
+    line++;
+    placed.push({ ...r, line });
+    line += breaks(lines[lines.length - 1]);
   });
   const text = (p.bom ? '\uFEFF' : '') + lines.join(eol) + (p.trailingNewline ? eol : '');
   return { text, rows: placed, names, garbageKind, priceFirst };
