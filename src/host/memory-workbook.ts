@@ -125,6 +125,8 @@ export class MemoryWorkbook implements WorkbookPort {
   async addLineChart(sheet: string, address: string, title: string): Promise<void> {
     const r = parseA1(address);
     const s = this.sheet(sheet);
+    const same = this.charts.findIndex((c) => c.sheet === s.name && c.title === title);
+    if (same >= 0) this.charts.splice(same, 1);
     this.charts.push({ sheet: s.name, address: formatA1({ ...r, sheet: undefined }), title });
   }
 

@@ -130,7 +130,14 @@ export class OfficeWorkbook implements WorkbookPort {
   async addLineChart(sheet: string, address: string, title: string): Promise<void> {
     await this.call(`adding a chart on "${sheet}"`, async (context) => {
       const ws = context.workbook.worksheets.getItem(sheet);
+      // one chart per title: a refreshed outlook replaces its chart instead of stacking another
+      const name = `Spotloom ${title}`.slice(0, 250);
+      const old = ws.charts.getItemOrNullObject(name);
+      old.load('isNullObject');
+      await context.sync();
+      if (!old.isNullObject) old.delete();
       const chart = ws.charts.add('Line', ws.getRange(stripSheet(address)), 'Columns');
+      chart.name = name;
       chart.title.text = title;
       await context.sync();
     });

@@ -35,7 +35,7 @@ export interface WorkbookPort {
   loadModels(): Promise<Record<string, string>>;
   saveModel(name: string, text: string): Promise<void>;
   deleteModel(name: string): Promise<void>;
-  /** a native line chart of the columns in `address` (first column: categories) */
+  /** a native line chart of the columns in `address` (first column: categories); it replaces a chart of the same title on that sheet */
   addLineChart(sheet: string, address: string, title: string): Promise<void>;
   /**
    * Recalculates the workbook's formulas, so that LOOM cells pick up a model

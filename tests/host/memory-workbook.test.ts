@@ -47,6 +47,8 @@ describe('MemoryWorkbook', () => {
     expect(await wb.loadModels()).toEqual({ b: 'text' });
     await wb.addLineChart('Sheet1', 'Sheet1!A1:C25', 'Tomorrow');
     expect(wb.charts).toEqual([{ sheet: 'Sheet1', address: 'A1:C25', title: 'Tomorrow' }]);
+    await wb.addLineChart('Sheet1', 'Sheet1!A1:C26', 'Tomorrow'); // a refresh replaces, never stacks
+    expect(wb.charts).toEqual([{ sheet: 'Sheet1', address: 'A1:C26', title: 'Tomorrow' }]);
   });
 
   it('a model named __proto__ is an ordinary key, not the prototype', async () => {

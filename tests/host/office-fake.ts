@@ -21,7 +21,7 @@ export interface FakeExcel {
   Excel: unknown;
   sheets: Map<string, Map<string, CellValue>>;
   parts: FakePart[];
-  charts: { sheet: string; type: string; address: string; seriesBy: string; title: string }[];
+  charts: { sheet: string; type: string; address: string; seriesBy: string; title: string; name?: string }[];
   syncs: number;
   calculations: string[];
   requests: { address: string; cells: number }[];
@@ -68,9 +68,18 @@ export function fakeExcel(init: { sheets?: Record<string, CellValue[][]>; parts?
     getRange: (address: string) => range(name, address),
     charts: {
       add: (type: string, source: object, seriesBy: string) => {
-        const chart = { title: { text: '' } };
-        atSync.push(() => state.charts.push({ sheet: name!, type, address: addresses.get(source)!, seriesBy, title: chart.title.text }));
+        const chart = { title: { text: '' }, name: undefined as string | undefined };
+        atSync.push(() => state.charts.push({ sheet: name!, type, address: addresses.get(source)!, seriesBy, title: chart.title.text, ...(chart.name ? { name: chart.name } : {}) }));
         return chart;
+      },
+      getItemOrNullObject: (chartName: string) => {
+        const found = () => state.charts.find((c) => c.sheet === name && c.name === chartName);
+        const item = {
+          isNullObject: true,
+          load: () => atSync.push(() => { item.isNullObject = !found(); }),
+          delete: () => atSync.push(() => { const c = found(); if (c) state.charts.splice(state.charts.indexOf(c), 1); }),
+        };
+        return item;
       },
     },
   });

@@ -109,6 +109,15 @@ describe('OfficeWorkbook (office-addin-mock)', () => {
   it('addLineChart adds a line chart of the columns with a title', async () => {
     const fake = fakeExcel({ sheets: { Outlook: [] } });
     await connect(fake).addLineChart('Outlook', 'Outlook!A1:C26', 'Tomorrow');
-    expect(fake.charts).toEqual([{ sheet: 'Outlook', type: 'Line', address: 'Outlook!A1:C26', seriesBy: 'Columns', title: 'Tomorrow' }]);
+    expect(fake.charts).toEqual([{ sheet: 'Outlook', type: 'Line', address: 'Outlook!A1:C26', seriesBy: 'Columns', title: 'Tomorrow', name: 'Spotloom Tomorrow' }]);
+  });
+
+  it('addLineChart replaces the chart of the same title instead of stacking another', async () => {
+    const fake = fakeExcel({ sheets: { Outlook: [] } });
+    const port = connect(fake);
+    await port.addLineChart('Outlook', 'Outlook!A1:C26', 'Tomorrow');
+    await port.addLineChart('Outlook', 'Outlook!A1:C30', 'Tomorrow');
+    await port.addLineChart('Outlook', 'Outlook!E1:F26', 'Scores');
+    expect(fake.charts.map((c) => [c.title, c.address])).toEqual([['Tomorrow', 'Outlook!A1:C30'], ['Scores', 'Outlook!E1:F26']]);
   });
 });
