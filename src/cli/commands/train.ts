@@ -1,7 +1,7 @@
 import { writeFileSync } from 'node:fs';
 import { basename } from 'node:path';
 import {
-  createModel, dayIndexOf, frameBefore, InputError, inputFrame, Learner, storedModelText, toStoredModel,
+  createModel, dayIndexOf, frameBefore, InputError, inputFrame, Learner, StoredName, storedModelText, toStoredModel,
 } from '../../engine';
 import { loadSeries } from '../load-input';
 import { modelOptions, type ModelFlags } from '../model-flags';
@@ -21,6 +21,12 @@ export async function trainCommand(flags: TrainFlags): Promise<void> {
   const model = createModel(flags.model, modelOptions(flags));
   if (!(model instanceof Learner)) throw new InputError(`--model ${flags.model} has nothing to train`);
   const { series } = loadSeries(flags.input, flags.tz, 'price', flags.missing);
+  // the model file keeps driver names: refuse one it cannot keep now, not after training
+  for (const name of Object.keys(series.drivers)) {
+    if (!StoredName.safeParse(name).success) {
+      throw new InputError(`column "${name}" cannot be a driver name in a model file, which allows letters, digits, _ . - and spaces (at most 64); rename the column`, { file: flags.input });
+    }
+  }
   const frame = inputFrame(series);
   let view = frame;
   if (flags.until !== undefined) {

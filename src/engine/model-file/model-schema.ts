@@ -15,8 +15,10 @@ export const MODEL_VERSION = 1;
 export const MAX_MODEL_BYTES = 2 * 1024 * 1024;
 
 const FORBIDDEN = new Set(['__proto__', 'constructor', 'prototype']);
-const Name = z.string().min(1).max(64).regex(/^[A-Za-z0-9_][A-Za-z0-9_ .-]*$/, 'names may hold letters, digits, _ . - and spaces')
+/** A model's or driver's name as a model file keeps it; check driver columns with it before training. */
+export const StoredName = z.string().min(1).max(64).regex(/^[A-Za-z0-9_][A-Za-z0-9_ .-]*$/, 'names may hold letters, digits, _ . - and spaces')
   .refine((s) => !FORBIDDEN.has(s), 'reserved name');
+const Name = StoredName;
 const Floats = z.string().max(MAX_MODEL_BYTES).regex(BASE64, 'not base64 text');
 const Finite = z.number().finite();
 const Day = z.string().regex(/^\d{4}-\d{2}-\d{2}$/);
