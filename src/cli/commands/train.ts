@@ -1,7 +1,7 @@
 import { writeFileSync } from 'node:fs';
 import { basename } from 'node:path';
 import {
-  createModel, dayIndexOf, frameBefore, InputError, inputFrame, Learner, StoredName, storedModelText, toStoredModel,
+  createModel, dayIndexOf, frameBefore, InputError, inputFrame, Learner, NAME_RULE, StoredName, storedModelText, toStoredModel,
 } from '../../engine';
 import { loadSeries } from '../load-input';
 import { modelOptions, type ModelFlags } from '../model-flags';
@@ -24,7 +24,7 @@ export async function trainCommand(flags: TrainFlags): Promise<void> {
   // the model file keeps driver names: refuse one it cannot keep now, not after training
   for (const name of Object.keys(series.drivers)) {
     if (!StoredName.safeParse(name).success) {
-      throw new InputError(`column "${name}" cannot be a driver name in a model file, which allows letters, digits, _ . - and spaces (at most 64); rename the column`, { file: flags.input });
+      throw new InputError(`column "${name}" cannot be a driver name in a model file, which allows ${NAME_RULE}; rename the column`, { file: flags.input });
     }
   }
   const frame = inputFrame(series);
