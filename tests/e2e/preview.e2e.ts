@@ -358,6 +358,30 @@ describe('the standalone preview in a real browser', () => {
     expect(await pv.readFormulas('odd!B2')).toEqual([['\'=LOOM.HOLIDAY("2026-10-03", "DE")']]);
   });
 
+  it('a training that fails in the worker (too little history) saves nothing and changes no cell', async () => {
+    const days = new Set([...new Set(history.slice(1).map((r) => String(r[0]).slice(0, 10)))].slice(-9));
+    const lines = ['timestamp,price', ...history.slice(1).filter((r) => days.has(String(r[0]).slice(0, 10))).map((r) => `${r[0]},${r[1] ?? ''}`)];
+    await page.setInputFiles('[data-test="csv-file"]', { name: 'short.csv', mimeType: 'text/csv', buffer: Buffer.from(`${lines.join('\n')}\n`) });
+    await page.waitForSelector('[data-test="csv-use-ranges"]');
+    await page.click('[data-test="csv-use-ranges"]');
+    await page.click('[data-test="check-data-button"]');
+    expect((await outcome('data-message')).kind).toBe('ok');
+    await pv.settled();
+    const before = await pv.fingerprint();
+    const models = await pv.storedModels();
+    await page.click('[data-test="tab-train"]');
+    await page.fill('[data-test="model-name"]', 'short');
+    await page.fill('[data-test="iterations"]', '20');
+    await page.fill('[data-test="ensemble"]', '1');
+    await page.click('[data-test="train-button"]');
+    const done = await outcome('train-message');
+    expect(done.kind).toBe('error');
+    expect(done.text).toMatch(/^training needs at least \d+ usable days/);
+    await pv.settled();
+    expect(await pv.fingerprint()).toBe(before);
+    expect(await pv.storedModels()).toEqual(models);
+  });
+
   it('sent no request beyond this machine and broke no Content-Security-Policy rule, in the page or its workers', async () => {
     expect(requests.length).toBeGreaterThan(10);
     const away = requests.filter((url) => {
