@@ -40,11 +40,8 @@ beforeAll(() => {
 const protoKeys = () => Object.getOwnPropertyNames(Object.prototype).sort().join();
 const protoBefore = protoKeys();
 
-/** A loaded model that forecasts ±Infinity fails the fuzz rule (the engine refuses such forecasts). */
-const STRICT = true;
-
 /** The fuzz rule for one model text: refused, or loaded and forecasting finite numbers. */
-function checkModelText(text: string): 'refused' | 'refused at forecast' | 'forecast' | 'non-finite' {
+function checkModelText(text: string): 'refused' | 'refused at forecast' | 'forecast' {
   const loaded = outcome(() => learnerFromStored(parseStoredModel(text, 'fuzz.json'), 'fuzz.json'));
   expect(({} as Record<string, unknown>).polluted).toBeUndefined();
   expect(protoKeys()).toBe(protoBefore);
@@ -57,7 +54,6 @@ function checkModelText(text: string): 'refused' | 'refused at forecast' | 'fore
   // a band may be unknown (both ends NaN, too few stored errors); a forecast may not
   const bandOk = (r: typeof rows[number]) => (Number.isNaN(r.lower) && Number.isNaN(r.upper)) || (Number.isFinite(r.lower) && Number.isFinite(r.upper) && r.lower <= r.upper);
   const bad = rows.find((r) => !Number.isFinite(r.forecast) || !bandOk(r));
-  if (bad && !STRICT && [bad.forecast, bad.lower, bad.upper].some((v) => !Number.isNaN(v) && !Number.isFinite(v))) return 'non-finite';
   expect(bad, `a loaded model forecast ${JSON.stringify(bad)}`).toBeUndefined();
   return 'forecast';
 }
@@ -146,7 +142,6 @@ describe('parseStoredModel + learnerFromStored on untrusted text', () => {
     // both branches are exercised (harmless edits such as a new name or note load and forecast)
     expect(seen.refused).toBeGreaterThan(0);
     expect(seen.forecast).toBeGreaterThan(0);
-    if (seen['non-finite']) console.warn(`model-file fuzz: ${seen['non-finite']} mutated models forecast ±Infinity (known open, see checkModelText)`);
   });
 
   it('refuse text-level damage: flipped characters, cut files, duplicated keys, more than 2 MB', () => {
