@@ -382,6 +382,20 @@ describe('the standalone preview in a real browser', () => {
     expect(await pv.storedModels()).toEqual(models);
   });
 
+  it('"Reset workbook" asks, then forgets the models and written cells and opens the demo workbook as new', async () => {
+    await page.click('[data-test="reset-button"]');
+    await page.waitForSelector('[data-test="confirm-dialog"]:not([hidden])');
+    await page.click('[data-test="confirm-no"]');
+    expect(await pv.models()).toEqual([MODEL_NAME]);
+    await page.click('[data-test="reset-button"]');
+    await page.waitForSelector('[data-test="confirm-dialog"]:not([hidden])');
+    await Promise.all([page.waitForEvent('load'), page.click('[data-test="confirm-yes"]')]);
+    await pv.settled();
+    expect(await pv.models()).toEqual([]);
+    expect(await page.locator('[data-test="sheet-tab"]').count()).toBe(4);
+    expect(await pv.readRange('Forecast!A1')).toEqual(demo.sheets.Forecast);
+  });
+
   it('sent no request beyond this machine and broke no Content-Security-Policy rule, in the page or its workers', async () => {
     expect(requests.length).toBeGreaterThan(10);
     const away = requests.filter((url) => {
