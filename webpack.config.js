@@ -128,7 +128,11 @@ async function devServer() {
     host: 'localhost', // nothing is served beyond this machine
     port: ADDIN_PORT,
     server: { type: 'https', options: await httpsOptions() },
-    headers: { 'Access-Control-Allow-Origin': '*' },
+    // the same policy as the pages' meta tag, as a header so that the training worker is under it too
+    headers: {
+      'Access-Control-Allow-Origin': '*',
+      'Content-Security-Policy': "default-src 'self'; script-src 'self'; style-src 'self'; worker-src 'self' blob:; connect-src 'self'; img-src 'self' data:",
+    },
     // no hot reload and no live-reload client: it would inject a script and a
     // WebSocket that the pane's Content-Security-Policy rightly refuses
     hot: false,

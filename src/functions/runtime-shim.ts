@@ -38,12 +38,17 @@ const standIn: CustomFunctionsApi = {
   },
 };
 
-const scope = globalThis as { CustomFunctions?: CustomFunctionsApi };
-scope.CustomFunctions ??= standIn;
+const scope = globalThis as { CustomFunctions?: Partial<CustomFunctionsApi> };
+// office.js outside a host leaves a bare CustomFunctions (associate only): complete what is missing
+if (!scope.CustomFunctions) scope.CustomFunctions = standIn;
+else {
+  scope.CustomFunctions.Error ??= standIn.Error;
+  scope.CustomFunctions.ErrorCode ??= standIn.ErrorCode;
+}
 
 /** The host's runtime, or the stand-in. */
 export function customFunctionsApi(): CustomFunctionsApi {
-  return scope.CustomFunctions ?? standIn;
+  return (scope.CustomFunctions as CustomFunctionsApi | undefined) ?? standIn;
 }
 
 /** Functions associated with the stand-in, by id (AHEAD, BAND, ...); empty inside the host. */

@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { associatedFunctions, customFunctionsApi } from '../../src/functions/runtime-shim';
 
 describe('runtime-shim', () => {
@@ -18,5 +18,24 @@ describe('runtime-shim', () => {
     const api = customFunctionsApi();
     const e = new api.Error(api.ErrorCode.notAvailable, 'why');
     expect(e).toMatchObject({ code: '#N/A', message: 'why' });
+  });
+
+  it('completes a bare CustomFunctions global (office.js outside a host leaves only associate)', async () => {
+    vi.resetModules();
+    const scope = globalThis as { CustomFunctions?: unknown };
+    const before = scope.CustomFunctions;
+    const associate = () => {};
+    scope.CustomFunctions = { associate };
+    try {
+      const { customFunctionsApi } = await import('../../src/functions/runtime-shim');
+      const api = customFunctionsApi();
+      expect(api.associate).toBe(associate);
+      const e = new api.Error(api.ErrorCode.invalidValue, 'fix this');
+      expect(e).toBeInstanceOf(api.Error);
+      expect(e.code).toBe('#VALUE!');
+    } finally {
+      scope.CustomFunctions = before;
+      vi.resetModules();
+    }
   });
 });
