@@ -202,7 +202,8 @@ export class Learner implements DayAheadModel {
   private pointForecast(x: Float64Array, scale: { centre: number; scale: number }): Float64Array {
     const state = this.fitted();
     const m = state.targetRange.lo.length;
-    const lin = linearPrice(state.linear, state.standardiser, x, m, scale);
+    // held inside the (widened) range of scaled prices seen in training
+    const lin = linearPrice(state.linear, state.standardiser, x, m, scale, state.targetRange);
     if (this.nets.length === 0) return lin;
     const input = standardise(x, state.standardiser);
     const sum = new Float64Array(m);

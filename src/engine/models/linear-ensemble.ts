@@ -64,12 +64,23 @@ export function fitLinearEnsemble(
   return { members, trainOnly, sums };
 }
 
-/** The members' average forecast in price units. */
-export function linearPrice(members: LinearMember[], s: Standardiser, x: Float64Array, m: number, scale: LevelScale): Float64Array {
+/**
+ * The members' average forecast in price units. With `bounds`, each scaled
+ * forecast is held inside them first: a linear model extrapolates without
+ * limit, and the inverse asinh turns a driver far outside anything seen in
+ * training (one mistyped row) into astronomically large prices.
+ */
+export function linearPrice(
+  members: LinearMember[], s: Standardiser, x: Float64Array, m: number, scale: LevelScale,
+  bounds?: { lo: Float64Array; hi: Float64Array },
+): Float64Array {
   const out = new Float64Array(m);
   for (const member of members) {
     const z = predictRidge(member.weights, s, x, m);
-    for (let c = 0; c < m; c++) out[c] += fromScaled(z[c], scale) / members.length;
+    for (let c = 0; c < m; c++) {
+      const held = bounds ? Math.min(bounds.hi[c], Math.max(bounds.lo[c], z[c])) : z[c];
+      out[c] += fromScaled(held, scale) / members.length;
+    }
   }
   return out;
 }
