@@ -80,6 +80,9 @@ export function seriesFromRanges(args: RangeArgs, options: SeriesOptions): { ser
 
 function addDrivers(rows: Map<number, Row>, times: (number | undefined)[], titled: boolean, args: RangeArgs, names: string[], zone: string, dateSystem: DateSystem): void {
   let grid = cellGrid(args.drivers);
+  if (grid.length === 0 || grid[0].length === 0) {
+    throw new InputError(`drivers is empty; give the ${names.length} driver column${names.length === 1 ? '' : 's'} the model uses (${names.join(', ')})`);
+  }
   const header = grid[0].every(isTitle);
   const columns = header ? names.map((name) => columnOf(grid[0] as string[], name, names)) : names.map((_, k) => k);
   if (!header && grid[0].length !== names.length) {
