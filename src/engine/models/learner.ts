@@ -38,6 +38,8 @@ export interface LearnerState {
 const MIN_TRAINING_DAYS = 56;
 /** days between warm starts of the networks during updates (they cost far more than the linear part) */
 const NETWORK_REFRESH_DAYS = 7;
+/** a driver further than this many training standard deviations from its mean is taken for a typing error */
+const MAX_DRIVER_SD = 20;
 
 /**
  * The learned day-ahead model: averaged ridge models and an ensemble of brain.js
@@ -161,6 +163,14 @@ export class Learner implements DayAheadModel {
     for (const name of state.setup.drivers) {
       if (!view.drivers[name]?.[d] || view.drivers[name][d].some(Number.isNaN)) {
         throw new InputError(`cannot forecast ${view.days[d]?.date ?? 'the next day'}: driver "${name}" is missing for that day; add its forecast rows`);
+      }
+      // a mistyped cell (a sentinel, a unit slip) would otherwise give a plausible-looking wrong forecast
+      const { mean, sd } = state.setup.driverStats[name];
+      const wild = view.drivers[name][d].findIndex((v) => Math.abs(v - mean) > MAX_DRIVER_SD * sd);
+      if (wild >= 0) {
+        throw new InputError(
+          `cannot forecast ${view.days[d].date}: driver "${name}" is ${view.drivers[name][d][wild]} in slot ${wild + 1}, more than ${MAX_DRIVER_SD} standard deviations from its training mean ${mean.toPrecision(4)}; check that value`,
+        );
       }
     }
     const f = this.featureCache().features(view, d);
