@@ -18,8 +18,8 @@ const FORBIDDEN = new Set(['__proto__', 'constructor', 'prototype']);
 /** A model's or driver's name as a model file keeps it; check driver columns with it before training. */
 // real column headers carry units ("load (MW)", "wind [MW]", "temp °C"): allow those, but no
 // control characters, quotes or separators that could confuse a message or a file
-export const NAME_RULE = 'letters, digits, spaces and _ . - ( ) [ ] / % ° # + (at most 64)';
-export const StoredName = z.string().min(1).max(64).regex(/^[\p{L}\p{N}_][\p{L}\p{N}_ .\-()[\]/%°#+]*$/u, `names may hold ${NAME_RULE}`)
+export const NAME_RULE = 'letters, digits, spaces and _ . - ( ) [ ] % ° # + (at most 64)';
+export const StoredName = z.string().min(1).max(64).regex(/^[\p{L}\p{N}_][\p{L}\p{N}_ .\-()[\]%°#+]*$/u, `names may hold ${NAME_RULE}`)
   .refine((s) => !FORBIDDEN.has(s), 'reserved name');
 const Name = StoredName;
 const Floats = z.string().max(MAX_MODEL_BYTES).regex(BASE64, 'not base64 text');
