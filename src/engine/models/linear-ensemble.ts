@@ -1,8 +1,8 @@
 import type { LevelScale } from '../features/level-scale';
 import { fromScaled } from '../features/level-scale';
-import { addRow, type Gram } from '../linalg/gram';
+import type { Gram } from '../linalg/gram';
 import { RIDGE_LAMBDAS } from './learner-settings';
-import { predictRidge, ridgeGram, ridgeRow, solveRidge } from './ridge';
+import { addRidgeDay, predictRidge, ridgeGram, solveRidge } from './ridge';
 import type { Standardiser } from './standardiser';
 import type { TrainingDay } from './training-days';
 
@@ -87,11 +87,11 @@ export function linearPrice(
 
 /** Takes new days into a member's sums, drops those that left its window, and re-solves. */
 export function advanceMember(member: LinearMember, sums: MemberSums, fresh: TrainingDay[], s: Standardiser): void {
-  for (const d of fresh) { addRow(sums.gram, ridgeRow(d.x, s), d.y!); sums.days.push(d); }
+  for (const d of fresh) { addRidgeDay(sums.gram, s, d.x, d.y!); sums.days.push(d); }
   if (member.window > 0) {
     while (sums.days.length > member.window) {
       const old = sums.days.shift()!;
-      addRow(sums.gram, ridgeRow(old.x, s), old.y!, -1);
+      addRidgeDay(sums.gram, s, old.x, old.y!, -1);
     }
   }
   member.weights = solveRidge(sums.gram, member.lambda);

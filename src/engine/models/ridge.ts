@@ -9,14 +9,6 @@ import { standardise, type Standardiser } from './standardiser';
  * standardised; the intercept (last coefficient row) is not penalised.
  * Sums are kept (gram.ts) so the model can take new days cheaply.
  */
-export interface Ridge {
-  standardiser: Standardiser;
-  lambda: number;
-  gram: Gram;
-  /** (p + 1) × m coefficients, row-major; the last row is the intercept */
-  weights: Float64Array;
-}
-
 export function ridgeRow(x: Float64Array, s: Standardiser): Float64Array {
   const z = standardise(x, s);
   const row = new Float64Array(z.length + 1);
@@ -27,7 +19,7 @@ export function ridgeRow(x: Float64Array, s: Standardiser): Float64Array {
 
 export function ridgeGram(xs: Float64Array[], ys: Float64Array[], s: Standardiser): Gram {
   const g = emptyGram(xs[0].length + 1, ys[0].length);
-  for (let i = 0; i < xs.length; i++) addRow(g, ridgeRow(xs[i], s), ys[i]);
+  for (let i = 0; i < xs.length; i++) addRidgeDay(g, s, xs[i], ys[i]);
   return g;
 }
 
@@ -45,8 +37,9 @@ export function solveRidge(g: Gram, lambda: number): Float64Array {
   return w.map(Math.fround);
 }
 
-export function addRidgeDay(r: Ridge, x: Float64Array, y: Float64Array): void {
-  addRow(r.gram, ridgeRow(x, r.standardiser), y);
+/** Adds one day to the sums of a ridge model; weight −1 takes it out again. */
+export function addRidgeDay(gram: Gram, s: Standardiser, x: Float64Array, y: Float64Array, weight: 1 | -1 = 1): void {
+  addRow(gram, ridgeRow(x, s), y, weight);
 }
 
 export function predictRidge(weights: Float64Array, s: Standardiser, x: Float64Array, m: number): Float64Array {

@@ -61,8 +61,8 @@ describe('ridgeRow(x, s), ridgeGram, addRidgeDay', () => {
   });
 
   it('addRidgeDay after ridgeGram on fewer days gives the sums of all days', () => {
-    const r = { standardiser: s, lambda: 0.05, gram: ridgeGram(xs.slice(0, n - 5), ys.slice(0, n - 5), s), weights: new Float64Array() };
-    for (let i = n - 5; i < n; i++) addRidgeDay(r, xs[i], ys[i]);
+    const r = { gram: ridgeGram(xs.slice(0, n - 5), ys.slice(0, n - 5), s) };
+    for (let i = n - 5; i < n; i++) addRidgeDay(r.gram, s, xs[i], ys[i]);
     const all = ridgeGram(xs, ys, s);
     expect(r.gram.rows).toBe(n);
     r.gram.xtx.forEach((v, i) => expect(v).toBeCloseTo(all.xtx[i], 10));
