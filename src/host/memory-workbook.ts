@@ -28,6 +28,8 @@ export interface MemoryWorkbookOptions {
   evaluate?: (formula: string, at: { sheet: string; row: number; column: number }) => CellValue;
   /** called by recalculate() */
   onRecalculate?: () => void;
+  /** rows × columns a formula cell's result fills (the preview's evaluator knows); one cell without it */
+  spill?: (at: { sheet: string; row: number; column: number }) => { rows: number; columns: number } | undefined;
 }
 
 export interface RecordedChart {
@@ -51,12 +53,14 @@ export class MemoryWorkbook implements WorkbookPort {
   private readonly models = new Map<string, string>();
   private readonly system: '1900' | '1904';
   private readonly evaluate?: MemoryWorkbookOptions['evaluate'];
+  private readonly spill?: MemoryWorkbookOptions['spill'];
   private selection: string;
   private active = 0;
 
   constructor(options: MemoryWorkbookOptions = {}) {
     this.system = options.dateSystem ?? '1900';
     this.evaluate = options.evaluate;
+    this.spill = options.spill;
     this.onRecalculate = options.onRecalculate;
     for (const [name, grid] of Object.entries(options.sheets ?? {})) {
       const sheet = this.addSheet(name);
@@ -110,6 +114,26 @@ export class MemoryWorkbook implements WorkbookPort {
     if (!this.find(name)) this.addSheet(name);
   }
 
+  async usedAddress(name: string): Promise<string | undefined> {
+    const sheet = this.sheet(name);
+    let rows = 0, columns = 0;
+    for (const key of sheet.cells.keys()) {
+      const [r, c] = key.split(',').map(Number);
+      const size = this.spillSize(sheet, r, c);
+      rows = Math.max(rows, r + size.rows);
+      columns = Math.max(columns, c + size.columns);
+    }
+    return rows === 0 ? undefined : formatA1({ sheet: sheet.name, row: 0, column: 0, rows, columns });
+  }
+
+  async spillRanges(cells: string[]): Promise<string[]> {
+    return cells.map((address) => {
+      const r = parseA1(address);
+      const sheet = this.sheet(r.sheet);
+      return formatA1({ sheet: sheet.name, row: r.row, column: r.column, ...this.spillSize(sheet, r.row, r.column) });
+    });
+  }
+
   async loadModels(): Promise<Record<string, string>> {
     return Object.fromEntries(this.models);
   }
@@ -148,6 +172,12 @@ export class MemoryWorkbook implements WorkbookPort {
       columns = Math.max(columns, c + 1);
     }
     return Array.from({ length: rows }, (_, r) => Array.from({ length: columns }, (_, c) => sheet.cells.get(`${r},${c}`) ?? null));
+  }
+
+  private spillSize(sheet: Sheet, row: number, column: number): { rows: number; columns: number } {
+    const v = sheet.cells.get(`${row},${column}`);
+    const isFormula = typeof v === 'string' && v.startsWith('=');
+    return (isFormula && this.spill?.({ sheet: sheet.name, row, column })) || { rows: 1, columns: 1 };
   }
 
   private read(address: string, view: (sheet: Sheet, row: number, column: number, v: CellValue) => CellValue): CellValue[][] {

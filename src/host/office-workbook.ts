@@ -85,6 +85,33 @@ export class OfficeWorkbook implements WorkbookPort {
     });
   }
 
+  async usedAddress(sheet: string): Promise<string | undefined> {
+    return this.call(`reading the used range of "${sheet}"`, async (context) => {
+      // valuesOnly false: cells that hold only a format are left out by the host anyway, formulas count (ExcelApi 1.4, from memory)
+      const used = context.workbook.worksheets.getItem(sheet).getUsedRangeOrNullObject(false);
+      used.load(['isNullObject', 'address']);
+      await context.sync();
+      if (used.isNullObject) return undefined;
+      // the used range may start below A1; the port's promise is "from A1", which keeps row numbers plain
+      const r = parseA1(used.address);
+      return formatA1({ sheet: r.sheet ?? sheet, row: 0, column: 0, rows: r.row + r.rows, columns: r.column + r.columns });
+    });
+  }
+
+  async spillRanges(cells: string[]): Promise<string[]> {
+    if (cells.length === 0) return [];
+    return this.call('reading where formulas spill', async (context) => {
+      // getSpillingToRangeOrNullObject (ExcelApi 1.12, from memory): the whole range a dynamic-array formula fills
+      const spills = cells.map((address) => {
+        const spill = this.range(context, address).getSpillingToRangeOrNullObject();
+        spill.load(['isNullObject', 'address']);
+        return spill;
+      });
+      await context.sync();
+      return spills.map((s, i) => (s.isNullObject ? cells[i] : s.address));
+    });
+  }
+
   async ensureSheet(name: string): Promise<void> {
     await this.call(`adding sheet "${name}"`, async (context) => {
       const sheet = context.workbook.worksheets.getItemOrNullObject(name);

@@ -29,6 +29,18 @@ export interface WorkbookPort {
    */
   writeRange(address: string, values: CellValue[][]): Promise<void>;
   listSheets(): Promise<string[]>;
+  /**
+   * Address (with sheet) of the sheet's used cells, from A1 to the last
+   * row and column holding a value, a formula or a spilled value (so that
+   * everything written there lies inside it); undefined for an empty sheet.
+   */
+  usedAddress(sheet: string): Promise<string | undefined>;
+  /**
+   * For each formula cell (an address with sheet), the range its result
+   * fills: the cell and the cells it spills into, or the cell alone when the
+   * result is one value (or the formula could not spill).
+   */
+  spillRanges(cells: string[]): Promise<string[]>;
   /** adds the sheet when missing; never clears an existing one */
   ensureSheet(name: string): Promise<void>;
   /** stored model texts by model name, as saved in this workbook */

@@ -78,6 +78,7 @@ export class PreviewWorkbook implements WorkbookPort {
       models: saved.models,
       selection: options.selection,
       evaluate: (_formula, at) => this.valueAt(at.sheet, at.row, at.column),
+      spill: (at) => this.calc.result(at.sheet, at.row, at.column)?.spill,
     });
     for (const [name, grid] of Object.entries(options.sheets)) {
       this.names.push(name);
@@ -138,6 +139,16 @@ export class PreviewWorkbook implements WorkbookPort {
 
   async listSheets(): Promise<string[]> {
     return this.book.listSheets();
+  }
+
+  async usedAddress(sheet: string): Promise<string | undefined> {
+    await this.settled(); // what formulas spill is known once the recalculation is done
+    return this.book.usedAddress(sheet);
+  }
+
+  async spillRanges(cells: string[]): Promise<string[]> {
+    await this.settled();
+    return this.book.spillRanges(cells);
   }
 
   async ensureSheet(name: string): Promise<void> {

@@ -27,7 +27,11 @@ export interface FakeExcel {
   requests: { address: string; cells: number }[];
 }
 
-export function fakeExcel(init: { sheets?: Record<string, CellValue[][]>; parts?: FakePart[]; dateSystem?: '1900' | '1904'; selection?: string } = {}): FakeExcel {
+export function fakeExcel(init: {
+  sheets?: Record<string, CellValue[][]>; parts?: FakePart[]; dateSystem?: '1900' | '1904'; selection?: string;
+  /** formula cell → the range it spills into, e.g. { 'Outlook!B13': 'Outlook!B13:B36' } (the host's dynamic arrays, from memory) */
+  spills?: Record<string, string>;
+} = {}): FakeExcel {
   const state: FakeExcel = { Excel: undefined, sheets: new Map(), parts: [...(init.parts ?? [])], charts: [], syncs: 0, calculations: [], requests: [] };
   for (const [name, grid] of Object.entries(init.sheets ?? { Sheet1: [] })) {
     const cells = new Map<string, CellValue>();
@@ -50,6 +54,10 @@ export function fakeExcel(init: { sheets?: Record<string, CellValue[][]>; parts?
     const grid = Array.from({ length: r.rows }, (_, i) => Array.from({ length: r.columns }, (_, j) => cells?.get(`${r.row + i},${r.column + j}`) ?? ''));
     const values = grid.map((row) => row.map((v) => (typeof v === 'string' && v.startsWith('=') ? 0 : v)));
     const mock = track(new OfficeMockObject({ address: formatA1({ ...r, sheet }), values, formulas: grid }));
+    (mock as unknown as { getSpillingToRangeOrNullObject(): unknown }).getSpillingToRangeOrNullObject = () => {
+      const to = init.spills?.[formatA1({ ...r, sheet })];
+      return track(new OfficeMockObject({ address: to ?? '', isNullObject: to === undefined }));
+    };
     state.requests.push({ address: formatA1({ ...r, sheet }), cells: r.rows * r.columns });
     addresses.set(mock, formatA1({ ...r, sheet }));
     atSync.push(() => {
@@ -66,6 +74,14 @@ export function fakeExcel(init: { sheets?: Record<string, CellValue[][]>; parts?
 
   const worksheet = (name: string | undefined) => ({
     getRange: (address: string) => range(name, address),
+    // the host's used range starts at the first used cell, not at A1
+    getUsedRangeOrNullObject: () => {
+      const keys = [...(state.sheets.get(name ?? '')?.keys() ?? [])].map((k) => k.split(',').map(Number));
+      if (keys.length === 0) return track(new OfficeMockObject({ address: '', isNullObject: true }));
+      const top = Math.min(...keys.map((k) => k[0])), left = Math.min(...keys.map((k) => k[1]));
+      const bottom = Math.max(...keys.map((k) => k[0])), right = Math.max(...keys.map((k) => k[1]));
+      return track(new OfficeMockObject({ address: formatA1({ sheet: name, row: top, column: left, rows: bottom - top + 1, columns: right - left + 1 }), isNullObject: false }));
+    },
     charts: {
       add: (type: string, source: object, seriesBy: string) => {
         const chart = { title: { text: '' }, name: undefined as string | undefined };

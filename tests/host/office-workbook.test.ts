@@ -63,6 +63,18 @@ describe('OfficeWorkbook (office-addin-mock)', () => {
     expect(await wb.listSheets()).toEqual(['Sheet1', 'History', 'Outlook']);
   });
 
+  it('usedAddress reaches from A1 to the last used cell (the host\'s used range may start lower); an empty sheet has none', async () => {
+    const wb = connect(fakeExcel({ sheets: { Out: [[null, null], [null, null, '=LOOM.SEQ(3)'], [null, 'x']], Empty: [] } }));
+    expect(await wb.usedAddress('Out')).toBe('Out!A1:C3');
+    expect(await wb.usedAddress('Empty')).toBeUndefined();
+  });
+
+  it('spillRanges asks the host where each formula spills; a formula that does not spill fills its own cell', async () => {
+    const wb = connect(fakeExcel({ sheets: { Out: [['=LOOM.SEQ(3)', '=LOOM.MODEL("m")']] }, spills: { 'Out!A1': 'Out!A1:A3' } }));
+    expect(await wb.spillRanges(['Out!A1', 'Out!B1'])).toEqual(['Out!A1:A3', 'Out!B1']);
+    expect(await wb.spillRanges([])).toEqual([]);
+  });
+
   it('dateSystem tells the 1904 system from DATE(1904,1,1)', async () => {
     expect(await connect(fakeExcel()).dateSystem()).toBe('1900');
     expect(await connect(fakeExcel({ dateSystem: '1904' })).dateSystem()).toBe('1904');

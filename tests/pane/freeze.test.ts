@@ -1,43 +1,106 @@
 import { describe, expect, it } from 'vitest';
 import { MemoryWorkbook } from '../../src/host/memory-workbook';
-import { freezeRange, freezeValues } from '../../src/pane/logic/freeze';
+import type { CellValue } from '../../src/host/workbook-port';
+import { freezeLines, freezeQuestion, freezeSheets, freezeTargets } from '../../src/pane/logic/freeze';
+import type { LoomFunction } from '../../src/preview/loom-functions';
+import { PreviewWorkbook } from '../../src/preview/preview-workbook';
 
-describe('freezeValues(formulas, values)', () => {
-  it('replaces LOOM formulas by their values, keeps other formulas, writes spilled cells as their values', () => {
-    const formulas = [['=LOOM.AHEAD("m", A1:A9, B1:B9)', '=SUM(C1:C2)'], [41.5, 'label'], [null, null]];
-    const values = [[40.25, 7], [41.5, 'label'], [null, null]];
-    expect(freezeValues(formulas, values)).toEqual({ values: [[40.25, '=SUM(C1:C2)'], [41.5, 'label'], [null, null]], frozen: 1 });
+// The host's rule emulated here (from memory, as in the preview's evaluator):
+// a dynamic-array formula fills its own cell and spills into the empty cells
+// below and to the right; reading a spilled cell gives its value.
+
+/** Stand-in LOOM functions: SEQ(n) spills 1..n down, TWO spills two columns, FAIL shows #VALUE!. */
+const FAKE: Record<string, LoomFunction> = {
+  SEQ: { call: (async (n: number) => Array.from({ length: n }, (_, i) => [i + 1])) as never, params: ['scalar'], required: 1 },
+  TWO: { call: (async () => [[10, 20], [11, 21]]) as never, params: [], required: 0 },
+  FAIL: { call: (async () => { throw Object.assign(new Error('no model'), { code: '#VALUE!' }); }) as never, params: [], required: 0 },
+};
+
+function workbook(sheets: Record<string, CellValue[][]>): PreviewWorkbook {
+  return new PreviewWorkbook({ sheets, functions: FAKE });
+}
+
+/** Every formula left anywhere in the workbook that calls a LOOM function. */
+async function loomLeft(port: PreviewWorkbook): Promise<string[]> {
+  const left: string[] = [];
+  for (const sheet of await port.listSheets()) {
+    const used = await port.usedAddress(sheet);
+    if (!used) continue;
+    for (const row of await port.readFormulas(used)) for (const v of row) if (typeof v === 'string' && /^=.*LOOM\./i.test(v)) left.push(`${sheet}: ${v}`);
+  }
+  return left;
+}
+
+describe('freezeTargets(typed, sheets)', () => {
+  it('all sheets when nothing is typed; typed names in the workbook\'s own spelling, once each', () => {
+    expect(freezeTargets(' ', ['History', 'Outlook'])).toEqual(['History', 'Outlook']);
+    expect(freezeTargets('outlook, OUTLOOK ,Forecast', ['History', 'Outlook', 'Forecast'])).toEqual(['Outlook', 'Forecast']);
+  });
+
+  it('refuses a sheet the workbook does not have, naming the ones it has', () => {
+    expect(() => freezeTargets('Outlok', ['History', 'Outlook'])).toThrow('the workbook has no sheet named "Outlok" (sheets: History, Outlook)');
   });
 });
 
-describe('freezeRange(port, ask, address)', () => {
-  const workbook = () => new MemoryWorkbook({
-    sheets: { Outlook: [['delivery start', 'forecast'], ['2025-06-02T00:00:00+02:00', '=LOOM.AHEAD("main", H!A2:A9, H!B2:B9)'], [null, '=SUM(B2:B2)']] },
-    // a stand-in evaluator: every formula shows 42
-    evaluate: () => 42,
+describe('freezeSheets(port, ask, sheets)', () => {
+  const sheets = () => ({
+    History: [['t', 'p'], [1, 40]],
+    Outlook: [['start', 'forecast', 'band', '', 'kept'], ['00:00', '=LOOM.SEQ(3)', '=LOOM.TWO()', null, '=SUM(B2:B4)'], ['01:00'], ['02:00']],
+    Forecast: [['=LOOM.FAIL()', '=ROUND(LOOM.SEQ(1) * 2.5, 0)']],
   });
 
-  it('asks first and changes nothing when the answer is no', async () => {
-    const port = workbook();
-    const before = port.usedGrid('Outlook');
+  it('asks once, naming every sheet and its count; on no changes nothing', async () => {
+    const port = workbook(sheets());
+    await port.settled();
+    const before = [port.grid('Outlook'), port.grid('Forecast')];
     const questions: string[] = [];
-    const n = await freezeRange(port, async (q) => { questions.push(q); return false; }, 'Outlook!A1:B3');
-    expect(n).toBe(0);
-    expect(questions.length).toBe(1);
-    expect(questions[0]).toMatch(/^Replace the 1 LOOM formula in Outlook!A1:B3 by its current values\?/);
-    expect(port.usedGrid('Outlook')).toEqual(before);
+    expect(await freezeSheets(port, async (q) => { questions.push(q); return false; }, ['History', 'Outlook', 'Forecast'])).toBeUndefined();
+    expect(questions).toEqual(['Replace the 4 LOOM formulas on the sheets Outlook (2), Forecast (2) by their current values? The cells then hold fixed numbers that no longer update, and the workbook opens without the add-in.']);
+    expect([port.grid('Outlook'), port.grid('Forecast')]).toEqual(before);
   });
 
-  it('on yes writes the values in place of the LOOM formulas only', async () => {
-    const port = workbook();
-    expect(await freezeRange(port, async () => true, 'Outlook!A1:B3')).toBe(1);
-    expect(await port.readFormulas('Outlook!B2:B3')).toEqual([[42], ['=SUM(B2:B2)']]);
+  it('on yes no LOOM formula is left: each becomes its values, spilled cells too; other formulas stay and compute on them', async () => {
+    const port = workbook(sheets());
+    const done = await freezeSheets(port, async () => true, await port.listSheets());
+    expect(done).toEqual([
+      { sheet: 'Outlook', formulas: ['B2', 'C2'], cells: 3 + 4, errors: [] },
+      { sheet: 'Forecast', formulas: ['A1', 'B1'], cells: 2, errors: ['A1'] },
+    ]);
+    expect(await loomLeft(port)).toEqual([]);
+    expect(await port.readFormulas('Outlook!B2:E4')).toEqual([[1, 10, 20, '=SUM(B2:B4)'], [2, 11, 21, null], [3, null, null, null]]);
+    expect(await port.readRange('Outlook!E2')).toEqual([[6]]);
+    // a formula that wraps a LOOM call is a LOOM formula: it is frozen to what it shows
+    expect(await port.readFormulas('Forecast!A1:B1')).toEqual([['#VALUE!', 3]]);
   });
 
-  it('asks nothing and writes nothing when there is no LOOM formula', async () => {
-    const port = new MemoryWorkbook({ sheets: { Outlook: [['a', 1]] } });
-    let asked = false;
-    expect(await freezeRange(port, async () => { asked = true; return true; }, 'Outlook!A1:B1')).toBe(0);
-    expect(asked).toBe(false);
+  it('only the sheets named; nobody is asked when they hold no LOOM formula', async () => {
+    const port = workbook(sheets());
+    let asked = 0;
+    expect(await freezeSheets(port, async () => { asked++; return true; }, ['History'])).toEqual([]);
+    expect(asked).toBe(0);
+    await freezeSheets(port, async () => true, ['Forecast']);
+    expect((await loomLeft(port)).map((l) => l.split(':')[0])).toEqual(['Outlook', 'Outlook']);
+  });
+
+  it('the plain memory workbook (no evaluator) freezes each cell alone', async () => {
+    const port = new MemoryWorkbook({ sheets: { S: [['=LOOM.AHEAD("m", A1:A9, B1:B9)', '=SUM(C1:C2)']] }, evaluate: () => 42 });
+    expect(await freezeSheets(port, async () => true, ['S'])).toEqual([{ sheet: 'S', formulas: ['A1'], cells: 1, errors: [] }]);
+    expect(await port.readFormulas('S!A1:B1')).toEqual([[42, '=SUM(C1:C2)']]);
+  });
+
+  it('stops before writing anything while a LOOM cell is still computing', async () => {
+    const port = new MemoryWorkbook({ sheets: { S: [['=LOOM.AHEAD("m", A1:A9, B1:B9)']] }, evaluate: () => '#BUSY!' });
+    await expect(freezeSheets(port, async () => true, ['S'])).rejects.toThrow('S!A1 is still computing (#BUSY!); wait until every LOOM cell shows its result, then freeze');
+    expect(await port.readFormulas('S!A1')).toEqual([['=LOOM.AHEAD("m", A1:A9, B1:B9)']]);
+  });
+});
+
+describe('freezeQuestion and freezeLines', () => {
+  it('singular for one formula on one sheet; long lists are cut with a count', () => {
+    expect(freezeQuestion([{ sheet: 'Outlook', formulas: ['B13'], cells: 24, errors: [] }])).toMatch(/^Replace the 1 LOOM formula on the sheet Outlook \(1\) by its current values\?/);
+    const many = Array.from({ length: 10 }, (_, i) => `B${i + 1}`);
+    expect(freezeLines([{ sheet: 'S', formulas: many, cells: 1, errors: ['B2'] }])).toEqual([
+      'S: 10 LOOM formulas (B1, B2, B3, B4, B5, B6, B7, B8 and 2 more), 1 cell now fixed values; 1 showed an error and now holds its text (B2)',
+    ]);
   });
 });

@@ -1,41 +1,122 @@
+import { InputError } from '../../engine';
+import { formatA1, parseA1 } from '../../host/a1';
 import { writeWithConsent } from '../../host/safe-write';
 import type { AskUser, CellValue, WorkbookPort } from '../../host/workbook-port';
 import { isLoomFormula } from './formula-text';
 
 /**
- * What freezing a range writes: every LOOM formula becomes the value it
- * shows now. Cells a LOOM formula spills into read back as plain values and
- * are written as such, so the spilled numbers stay after their formula is
- * gone. Other formulas (a plain `=SUM(...)`) are kept as formulas.
+ * "Freeze to values": every LOOM formula of the named sheets (all sheets by
+ * default) becomes the values it shows now, in its own cell and in the cells
+ * it spills into, so that the workbook opens and reads the same without the
+ * add-in. Other formulas (a plain `=SUM(...)`) stay formulas: they compute
+ * in any spreadsheet, now on the frozen numbers. Cells outside the LOOM
+ * results are never written.
  *
- * @param formulas the range's formulas (readFormulas)
- * @param values the same range's values (readRange)
- * @returns the cells to write and how many LOOM formulas they replace
- * @example freezeValues([['=LOOM.AHEAD("m", A1:A9, B1:B9)']], [[41.5]]) // { values: [[41.5]], frozen: 1 }
+ * A LOOM cell that shows an error is frozen as that error text and counted,
+ * so the list says where to look; a cell still computing (#BUSY!) stops the
+ * freeze before anything is written.
  */
-export function freezeValues(formulas: CellValue[][], values: CellValue[][]): { values: CellValue[][]; frozen: number } {
-  let frozen = 0;
-  const out = formulas.map((row, i) => row.map((f, j) => {
-    if (isLoomFormula(f)) { frozen++; return values[i]?.[j] ?? ''; }
-    if (typeof f === 'string' && f.startsWith('=')) return f;
-    return values[i]?.[j] ?? f;
-  }));
-  return { values: out, frozen };
+
+/** What freezing does, or did, on one sheet. */
+export interface SheetFreeze {
+  sheet: string;
+  /** the LOOM formula cells, e.g. ['B13', 'C13'] */
+  formulas: string[];
+  /** cells written: the formula cells and the cells they spill into */
+  cells: number;
+  /** LOOM cells that showed an error value (frozen as its text) */
+  errors: string[];
+}
+
+interface Area {
+  address: string;
+  values: CellValue[][];
+}
+
+/** Error values a cell can show (ECMA-376 Part 1, 18.17.3, plus the host's dynamic-array ones, from memory). */
+const ERROR_VALUE = /^#(NULL!|DIV\/0!|VALUE!|REF!|NAME\?|NUM!|N\/A|SPILL!|CALC!|BUSY!|GETTING_DATA|CONNECT!|BLOCKED!|FIELD!|UNKNOWN!)$/;
+const STILL_COMPUTING = new Set(['#BUSY!', '#GETTING_DATA']);
+
+/**
+ * The sheets a freeze covers: the names typed (comma-separated, any case),
+ * or every sheet of the workbook when none is typed.
+ *
+ * @throws InputError naming a sheet the workbook does not have
+ * @example freezeTargets('outlook, Forecast', ['History', 'Outlook', 'Forecast']) // ['Outlook', 'Forecast']
+ */
+export function freezeTargets(typed: string, sheets: string[]): string[] {
+  const names = typed.split(',').map((s) => s.trim()).filter(Boolean);
+  if (names.length === 0) return sheets.slice();
+  return [...new Set(names.map((name) => {
+    const hit = sheets.find((s) => s.toLowerCase() === name.toLowerCase());
+    if (!hit) throw new InputError(`the workbook has no sheet named "${name}" (sheets: ${sheets.join(', ')})`);
+    return hit;
+  }))];
+}
+
+/** Reads what freezing `sheets` would write: per sheet, the LOOM cells and the values of the ranges they fill. */
+async function planFreeze(port: WorkbookPort, sheets: string[]): Promise<{ sheet: SheetFreeze; areas: Area[] }[]> {
+  const plan: { sheet: SheetFreeze; areas: Area[] }[] = [];
+  for (const name of sheets) {
+    const used = await port.usedAddress(name);
+    if (!used) continue;
+    const r = parseA1(used);
+    const formulas = await port.readFormulas(used);
+    const cells: { address: string; local: string }[] = [];
+    formulas.forEach((row, i) => row.forEach((f, j) => {
+      if (!isLoomFormula(f)) return;
+      const at = { row: r.row + i, column: r.column + j, rows: 1, columns: 1 };
+      cells.push({ address: formatA1({ ...at, sheet: name }), local: formatA1(at) });
+    }));
+    if (cells.length === 0) continue;
+    const ranges = await port.spillRanges(cells.map((c) => c.address));
+    const areas: Area[] = [];
+    const errors: string[] = [];
+    for (let k = 0; k < ranges.length; k++) {
+      const values = await port.readRange(ranges[k]);
+      const shown = values[0]?.[0];
+      if (typeof shown === 'string' && STILL_COMPUTING.has(shown)) {
+        throw new InputError(`${cells[k].address} is still computing (${shown}); wait until every LOOM cell shows its result, then freeze`);
+      }
+      if (typeof shown === 'string' && ERROR_VALUE.test(shown)) errors.push(cells[k].local);
+      areas.push({ address: ranges[k], values });
+    }
+    const written = areas.reduce((n, a) => n + a.values.length * (a.values[0]?.length ?? 0), 0);
+    plan.push({ sheet: { sheet: name, formulas: cells.map((c) => c.local), cells: written, errors }, areas });
+  }
+  return plan;
+}
+
+/** The one question asked before freezing. */
+export function freezeQuestion(sheets: SheetFreeze[]): string {
+  const n = sheets.reduce((s, x) => s + x.formulas.length, 0);
+  const where = sheets.map((s) => `${s.sheet} (${s.formulas.length})`).join(', ');
+  return `Replace the ${n} LOOM formula${n === 1 ? '' : 's'} on ${sheets.length === 1 ? 'the sheet' : 'the sheets'} ${where} by ${n === 1 ? 'its' : 'their'} current values? `
+    + 'The cells then hold fixed numbers that no longer update, and the workbook opens without the add-in.';
 }
 
 /**
- * Replaces the LOOM formulas of `address` by their current values, after
- * asking the user (through writeWithConsent, with a question saying what
- * freezing means). Nothing is written, and nobody asked, when the range holds
- * no LOOM formula.
+ * Freezes the LOOM formulas of `sheets` after asking once (the question
+ * names every sheet and how many formulas it holds). Nobody is asked, and
+ * nothing written, when there is no LOOM formula.
  *
- * @returns how many formulas were frozen (0: none there, or the user said no)
+ * @returns what was frozen per sheet (empty: nothing there), or undefined when the user said no
+ * @throws InputError when a LOOM cell is still computing
  */
-export async function freezeRange(port: WorkbookPort, ask: AskUser, address: string): Promise<number> {
-  const [formulas, values] = await Promise.all([port.readFormulas(address), port.readRange(address)]);
-  const plan = freezeValues(formulas, values);
-  if (plan.frozen === 0) return 0;
-  const question = `Replace the ${plan.frozen} LOOM formula${plan.frozen === 1 ? '' : 's'} in ${address} by ${plan.frozen === 1 ? 'its' : 'their'} current values? The sheet then shows fixed numbers that no longer update, and opens without the add-in.`;
-  const written = await writeWithConsent(port, () => ask(question), address, plan.values);
-  return written ? plan.frozen : 0;
+export async function freezeSheets(port: WorkbookPort, ask: AskUser, sheets: string[]): Promise<SheetFreeze[] | undefined> {
+  const plan = await planFreeze(port, sheets);
+  if (plan.length === 0) return [];
+  if (!(await ask(freezeQuestion(plan.map((p) => p.sheet))))) return undefined;
+  // the user has answered for every cell named in the question; each range goes through the one write path all the same
+  for (const { areas } of plan) for (const a of areas) await writeWithConsent(port, async () => true, a.address, a.values);
+  return plan.map((p) => p.sheet);
+}
+
+/** One line per frozen sheet for the pane's list. */
+export function freezeLines(done: SheetFreeze[]): string[] {
+  return done.map((s) => {
+    const shown = s.formulas.length > 8 ? `${s.formulas.slice(0, 8).join(', ')} and ${s.formulas.length - 8} more` : s.formulas.join(', ');
+    const errors = s.errors.length ? `; ${s.errors.length} showed an error and now ${s.errors.length === 1 ? 'holds' : 'hold'} its text (${s.errors.join(', ')})` : '';
+    return `${s.sheet}: ${s.formulas.length} LOOM formula${s.formulas.length === 1 ? '' : 's'} (${shown}), ${s.cells} cell${s.cells === 1 ? '' : 's'} now fixed values${errors}`;
+  });
 }

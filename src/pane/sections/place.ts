@@ -1,10 +1,10 @@
 import { InputError, storedModelText } from '../../engine';
 import { writeWithConsent } from '../../host/safe-write';
 import type { PaneContext } from '../context';
-import { field, guarded, h, messageLine } from '../dom';
+import { clear, field, guarded, h, messageLine } from '../dom';
 import { modelVersion } from '../logic/archive';
-import { freezeRange } from '../logic/freeze';
-import { OUTLOOK_FRAME, OUTLOOK_SHEET, type ScoreLine } from '../logic/outlook-layout';
+import { freezeLines, freezeSheets, freezeTargets } from '../logic/freeze';
+import { OUTLOOK_SHEET, type ScoreLine } from '../logic/outlook-layout';
 import { refreshOutlook } from '../logic/refresh-outlook';
 import { formulaBlock, valuesBlock, type ScoredRow } from '../logic/place-layout';
 import { forecastTomorrow, rowsOfDay } from '../logic/tomorrow';
@@ -14,7 +14,7 @@ import { modelPicker } from './model-picker';
 /**
  * Place: write tomorrow's forecast to the sheet, as values or as a live
  * formula block; rebuild the Outlook sheet (and archive what it issued);
- * freeze the Outlook to values for people without the add-in. Every write
+ * freeze the LOOM formulas of any sheets to values for people without the add-in. Every write
  * goes through writeWithConsent, which asks before overwriting a cell.
  */
 export function placeSection(ctx: PaneContext): HTMLElement {
@@ -67,11 +67,19 @@ export function placeSection(ctx: PaneContext): HTMLElement {
     message.ok(`Outlook rebuilt for ${days[0]} (${firstDay.length} periods); the issued forecast was appended to ${archived}.`);
   }));
 
+  const freezeSheetsBox = h('input', { type: 'text', test: 'freeze-sheets', placeholder: 'all sheets' });
+  const freezeMessage = messageLine('freeze-message');
+  const freezeReport = h('ul', { class: 'loom-report', test: 'freeze-report' });
   const freeze = h('button', { class: 'loom-button', type: 'button', test: 'freeze-button', text: 'Freeze to values' });
-  freeze.addEventListener('click', () => guarded(freeze, message, async () => {
-    if (!(await port.listSheets()).includes(OUTLOOK_SHEET)) throw new InputError('there is no Outlook sheet yet: press "Refresh outlook" first');
-    const n = await freezeRange(port, ask, OUTLOOK_FRAME);
-    message.info(n === 0 ? 'Nothing was frozen (no LOOM formulas there, or you said no).' : `Froze ${n} LOOM formulas on the Outlook sheet to their current values.`);
+  freeze.addEventListener('click', () => guarded(freeze, freezeMessage, async () => {
+    clear(freezeReport);
+    const sheets = freezeTargets(freezeSheetsBox.value, await port.listSheets());
+    const done = await freezeSheets(port, ask, sheets);
+    if (done === undefined) { freezeMessage.info('Nothing was frozen: you said no.'); return; }
+    if (done.length === 0) { freezeMessage.info(`There is no LOOM formula on ${sheets.length === 1 ? `the sheet ${sheets[0]}` : 'these sheets'}; nothing to freeze.`); return; }
+    const n = done.reduce((k, s) => k + s.formulas.length, 0);
+    for (const line of freezeLines(done)) freezeReport.appendChild(h('li', { text: line }));
+    freezeMessage.ok(`Froze ${n} LOOM formula${n === 1 ? '' : 's'} to ${n === 1 ? 'its' : 'their'} current values; no LOOM formula is left on ${done.length === 1 ? done[0].sheet : `${done.length} sheets`}.`);
   }));
 
   return h('section', { class: 'loom-section', test: 'section-place', data: { section: 'place' } },
@@ -82,8 +90,14 @@ export function placeSection(ctx: PaneContext): HTMLElement {
     h('div', { class: 'loom-actions' }, place),
     h('h3', { text: 'Outlook sheet' }),
     h('p', { class: 'loom-help', text: `Rebuilds the sheet "${OUTLOOK_SHEET}": tomorrow's forecast with its band, the baselines, recent scores and a chart. Each refresh also appends the forecast as issued to the sheet "Forecast archive", which is never rewritten.` }),
-    h('div', { class: 'loom-actions' }, refresh, freeze),
+    h('div', { class: 'loom-actions' }, refresh),
     message.el,
+    h('h3', { text: 'Freeze to values' }),
+    h('p', { class: 'loom-help', text: 'For sending the workbook to people without the add-in: every LOOM formula of the sheets named here becomes the numbers it shows now (the cells it spills into too). Other formulas stay. You are asked first.' }),
+    field('Sheets to freeze', freezeSheetsBox, 'Sheet names separated by commas; empty freezes every sheet of the workbook.'),
+    h('div', { class: 'loom-actions' }, freeze),
+    freezeMessage.el,
+    freezeReport,
   );
 }
 
