@@ -1,18 +1,23 @@
 import { InputError } from '../engine';
 import { formatA1 } from '../host/a1';
 import type { CellValue } from '../host/workbook-port';
-import { parseFormula, type FormulaNode } from './formula-parse';
+import { FormulaEngine, FormulaError, type CellReader, type Reference } from './formula-engine';
 import { LOOM_FUNCTIONS, type LoomFunction } from './loom-functions';
 
 /**
- * The preview grid's small evaluator: computes every formula cell of a
+ * The preview grid's recalculation: computes every formula cell of a
  * workbook once (a full recalculation), with spills as dynamic arrays have
- * them. A formula whose result has several cells writes the top-left one in
- * its own cell and spills the rest into the cells below and to the right,
- * which must be empty (else its cell shows #SPILL!). References read values:
- * a formula cell gives its result, a spilled cell its spilled value, an
- * empty cell null. A formula that refers to a cell showing an error shows
- * that error; one that refers to itself, directly or through others, #REF!.
+ * them. Each formula is read and evaluated by the formula libraries
+ * (formula-engine.ts: arithmetic, references, SUM, AVERAGE, ROUND, IF, …,
+ * and the LOOM functions through the custom-function hook); this file keeps
+ * what a workbook adds around single formulas. A formula whose result has
+ * several cells writes the top-left one in its own cell and spills the rest
+ * into the cells below and to the right, which must be empty (else its cell
+ * shows #SPILL!). References read values: a formula cell gives its result, a
+ * spilled cell its spilled value, an empty cell null. A formula that refers
+ * to a cell showing an error shows that error (unless it handles errors with
+ * IFERROR and the like); one that refers to itself, directly or through
+ * others, #REF!.
  *
  * Order: cells are computed sheet by sheet, row by row; before a reference
  * is read, every formula above and to the left of its far corner (the ones
@@ -65,6 +70,8 @@ interface Trace {
   models?: number;
   /** false once it read a formula or spilled cell, or missed a sheet: then it is not cached */
   pure: boolean;
+  /** error values read from single cells (the library hands some on without their message) */
+  errors: InstanceType<typeof FormulaError>[];
 }
 
 export interface CellError {
@@ -112,17 +119,7 @@ export async function calculate(source: CellSource, functions: Record<string, Lo
   const pending = new Map<string, Promise<FormulaResult>>();
   const spills = new Map<string, CellValue>();
   const spillSheets = new Set<string>();
-  const parsed = new Map<string, FormulaNode | InputError>();
-
-  const parse = (formula: string): FormulaNode => {
-    let hit = parsed.get(formula);
-    if (!hit) {
-      try { hit = parseFormula(formula); } catch (err) { hit = err instanceof InputError ? err : new InputError(String(err)); }
-      parsed.set(formula, hit);
-    }
-    if (hit instanceof InputError) throw new Failure('#NAME?', hit.message);
-    return hit;
-  };
+  const engine = new FormulaEngine(functions, asFailure, toGrid);
 
   const compute = (cell: FormulaCell, stack: Set<string>): Promise<FormulaResult> => {
     const k = key(cell.sheet, cell.row, cell.column);
@@ -148,6 +145,8 @@ export async function calculate(source: CellSource, functions: Record<string, Lo
     return hit;
   };
 
+  const readsModels = (formula: string) => Object.entries(functions).some(([name, fn]) => fn.readsModels && new RegExp(`\\bLOOM\\.${name}\\s*\\(`, 'i').test(formula));
+
   const evaluateCell = async (cell: FormulaCell, stack: Set<string>): Promise<FormulaResult> => {
     const cacheKey = `${cell.sheet.toLowerCase()}|${cell.formula}`;
     const hit = cached(cacheKey);
@@ -157,14 +156,17 @@ export async function calculate(source: CellSource, functions: Record<string, Lo
       grid = hit.grid;
     } else {
       // versions are taken before anything is read, so a change during the evaluation makes the entry stale, never wrong
-      const trace: Trace = { sheets: new Map(), pure: true };
+      const trace: Trace = { sheets: new Map(), pure: true, errors: [] };
       note(trace, cell.sheet);
+      if (readsModels(cell.formula)) trace.models = source.modelsVersion?.() ?? NaN;
       const remember = (entry: Pick<CachedResult, 'grid' | 'failure'>) => {
         if (!cache || !source.version || !trace.pure) return;
         cache.set(cacheKey, { ...entry, reads: [...trace.sheets], models: trace.models });
       };
       try {
-        grid = await evaluate(parse(cell.formula), cell, stack, trace);
+        // every formula that could fill a cell this one reads is computed first
+        for (const ref of engine.references(cell.formula, cell)) await computeInto(ref, stack);
+        grid = resultGrid(await engine.evaluate(cell.formula, cell, reader(cell, stack, trace)), trace.errors);
       } catch (err) {
         const f = asFailure(err);
         const error = { code: f.code, message: f.message };
@@ -194,87 +196,68 @@ export async function calculate(source: CellSource, functions: Record<string, Lo
     return { value: grid[0][0], spill: { rows, columns } };
   };
 
-  const evaluate = async (node: FormulaNode, at: FormulaCell, stack: Set<string>, trace: Trace): Promise<CellValue[][]> => {
-    switch (node.kind) {
-      case 'number': return [[node.value]];
-      case 'text': return [[node.value]];
-      case 'bool': return [[node.value]];
-      case 'neg': {
-        const inner = await evaluate(node.arg, at, stack, trace);
-        return inner.map((row) => row.map((v) => {
-          if (typeof v !== 'number') throw new Failure('#VALUE!', `cannot negate ${JSON.stringify(v)}: not a number`);
-          return -v;
-        }));
-      }
-      case 'ref': return read(node, at, stack, trace);
-      case 'call': return call(node, at, stack, trace);
-    }
-  };
-
-  const read = async (node: Extract<FormulaNode, { kind: 'ref' }>, at: FormulaCell, stack: Set<string>, trace: Trace): Promise<CellValue[][]> => {
-    const { range } = node;
-    const sheet = range.sheet === undefined ? at.sheet : source.sheetName(range.sheet);
-    if (sheet === undefined) {
-      trace.pure = false; // the sheet may come
-      throw new Failure('#REF!', `${node.text} refers to a sheet "${range.sheet}" that this workbook does not have`);
-    }
-    note(trace, sheet);
-    const bottom = range.row + range.rows - 1, right = range.column + range.columns - 1;
+  /** Computes the formulas above and to the left of a reference's far corner (the ones that could spill into it). */
+  const computeInto = async (ref: Reference, stack: Set<string>) => {
+    const sheet = source.sheetName(ref.sheet);
+    if (sheet === undefined) return;
+    const bottom = ref.row + ref.rows - 1, right = ref.column + ref.columns - 1;
     for (const f of bySheet.get(sheet.toLowerCase()) ?? []) {
       if (f.row <= bottom && f.column <= right && !stack.has(key(f.sheet, f.row, f.column))) await compute(f, stack);
     }
-    const out: CellValue[][] = [];
-    for (let i = 0; i < range.rows; i++) {
-      const row: CellValue[] = [];
-      for (let j = 0; j < range.columns; j++) {
-        const r = range.row + i, c = range.column + j, k = key(sheet, r, c);
-        const raw = source.raw(sheet, r, c);
-        if (typeof raw === 'string' && raw.startsWith('=')) {
-          trace.pure = false;
-          const done = results.get(k);
-          const where = formatA1({ sheet, row: r, column: c, rows: 1, columns: 1 });
-          if (!done) throw new Failure('#REF!', `circular reference: ${where} depends on this cell`);
-          if (done.error) throw new Failure(done.error.code, `${where} shows ${done.error.code}: ${done.error.message}`);
-          row.push(done.value);
-        } else if (raw === undefined) {
-          const spilled = spills.get(k);
-          if (spilled !== undefined) trace.pure = false;
-          row.push(spilled ?? null);
-        } else {
-          row.push(raw);
-        }
-      }
-      out.push(row);
-    }
-    return out;
   };
 
-  const call = async (node: Extract<FormulaNode, { kind: 'call' }>, at: FormulaCell, stack: Set<string>, trace: Trace): Promise<CellValue[][]> => {
-    const fn = Object.prototype.hasOwnProperty.call(functions, node.name) ? functions[node.name] : undefined;
-    if (!fn) throw new Failure('#NAME?', `LOOM.${node.name} is not a LOOM function; the preview knows ${Object.keys(functions).map((n) => `LOOM.${n}`).join(', ')}`);
-    if (node.args.length > fn.params.length) throw new Failure('#VALUE!', `LOOM.${node.name} takes at most ${fn.params.length} arguments, got ${node.args.length}`);
-    if (fn.readsModels && trace.models === undefined) trace.models = source.modelsVersion?.() ?? NaN;
-    const args: unknown[] = [];
-    for (let i = 0; i < fn.params.length; i++) {
-      const arg = node.args[i];
-      if (!arg) {
-        if (i < fn.required) throw new Failure('#VALUE!', `LOOM.${node.name} needs at least ${fn.required} arguments; argument ${i + 1} is missing`);
-        args.push(null);
-        continue;
+  /** The cells as one formula reads them: written values, formula results, spilled values; errors as error values. */
+  const reader = (at: FormulaCell, stack: Set<string>, trace: Trace): CellReader => {
+    const handlesErrors = HANDLES_ERRORS.test(at.formula);
+    const sheetOf = (name: string) => {
+      const sheet = source.sheetName(name || at.sheet);
+      if (sheet === undefined) {
+        trace.pure = false; // the sheet may come
+        throw new FormulaError('#REF!', `the formula refers to a sheet "${name}" that this workbook does not have`);
       }
-      const grid = await evaluate(arg, at, stack, trace);
-      if (fn.params[i] === 'matrix') { args.push(grid); continue; }
-      if (grid.length !== 1 || grid[0].length !== 1) throw new Failure('#VALUE!', `argument ${i + 1} of LOOM.${node.name} must be one cell or value, not ${grid.length} × ${grid[0].length} cells`);
-      args.push(grid[0][0]);
-    }
-    while (args.length && args[args.length - 1] === null) args.pop();
-    let result: unknown;
-    try {
-      result = await fn.call(...(args as never[]));
-    } catch (err) {
-      throw asFailure(err);
-    }
-    return toGrid(result, node.name);
+      note(trace, sheet);
+      return sheet;
+    };
+    const value = (sheet: string, r: number, c: number): unknown => {
+      const raw = source.raw(sheet, r, c);
+      if (typeof raw === 'string' && raw.startsWith('=')) {
+        trace.pure = false;
+        const k = key(sheet, r, c);
+        const done = results.get(k);
+        const where = formatA1({ sheet, row: r, column: c, rows: 1, columns: 1 });
+        if (!done) {
+          return new FormulaError('#REF!', stack.has(k)
+            ? `circular reference: ${where} depends on this cell`
+            : `${where} is computed after this cell; the preview follows only references written in the formula`);
+        }
+        if (done.error) return new FormulaError(done.error.code, `${where} shows ${done.error.code}: ${done.error.message}`);
+        return done.value;
+      }
+      if (raw === undefined) {
+        const spilled = spills.get(key(sheet, r, c));
+        if (spilled !== undefined) trace.pure = false;
+        return spilled ?? null;
+      }
+      return raw;
+    };
+    return {
+      cell: (name, r, c) => {
+        let v: unknown;
+        try { v = value(sheetOf(name), r, c); } catch (err) { v = err; }
+        if (!(v instanceof FormulaError)) return v;
+        if (!handlesErrors) throw v;
+        trace.errors.push(v);
+        return v;
+      },
+      range: (ref) => {
+        const sheet = sheetOf(ref.sheet);
+        if (ref.rows * ref.columns > MAX_CELLS) throw new FormulaError('#VALUE!', `a reference of ${ref.rows * ref.columns} cells is more than the preview reads (${MAX_CELLS}); name the rows`);
+        const grid = Array.from({ length: ref.rows }, (_, i) => Array.from({ length: ref.columns }, (_, j) => value(sheet, ref.row + i, ref.column + j)));
+        const error = grid.flat().find((v) => v instanceof FormulaError);
+        if (error && !handlesErrors) throw error;
+        return grid;
+      },
+    };
   };
 
   for (const cell of cells) await compute(cell, new Set());
@@ -291,33 +274,74 @@ export async function calculate(source: CellSource, functions: Record<string, Lo
   };
 }
 
+/**
+ * Error values read from cells: the formula library would let SUM, MAX and
+ * the like skip an error cell and give a number, where the host shows the
+ * error. So a cell or range showing an error fails the whole formula that
+ * reads it, unless the formula itself handles errors (IFERROR, ISERROR, …):
+ * then the error values reach those functions as the host gives them.
+ */
+const HANDLES_ERRORS = /\b(IFERROR|IFNA|ISERROR|ISERR|ISNA|ERROR\.TYPE)\s*\(/i;
+
+/** most cells one reference may read (a whole column of a sheet is 1 048 576) */
+const MAX_CELLS = 1_000_000;
+
+/**
+ * What a formula gave, as the cells it fills: a value is one cell, an
+ * array its rows × columns; an error value fails the whole formula. A
+ * formula that only refers to an empty cell shows 0, as the host shows it
+ * (from memory); LOOM results keep their empty cells.
+ */
+function resultGrid(result: unknown, read: InstanceType<typeof FormulaError>[]): CellValue[][] {
+  if (result instanceof FormulaError) {
+    if (result.message) throw result;
+    // the library gives a bare reference to an error cell as a plain #VALUE!: the cell's own error is the one to show
+    throw read.find((e) => e.error === result.error) ?? (result.error === '#VALUE!' && read.length === 1 ? read[0] : result);
+  }
+  if (result === null || result === undefined) return [[0]];
+  return toGrid(result, 'the formula');
+}
+
 /** A function's return value as rows × columns of cell values. */
 function toGrid(result: unknown, name: string): CellValue[][] {
+  const who = name === 'the formula' ? name : `LOOM.${name}`;
   const grid = Array.isArray(result) ? (result.every(Array.isArray) ? result as unknown[][] : result.map((v) => [v])) : [[result]];
-  if (grid.length === 0 || grid[0].length === 0) throw new Failure('#VALUE!', `LOOM.${name} gave an empty result`);
+  if (grid.length === 0 || grid[0].length === 0) throw new Failure('#VALUE!', `${who} gave an empty result`);
   const width = grid[0].length;
   return grid.map((row) => {
-    if (row.length !== width) throw new Failure('#VALUE!', `LOOM.${name} gave rows of different lengths`);
-    return row.map((v) => cellOf(v, name));
+    if (row.length !== width) throw new Failure('#VALUE!', `${who} gave rows of different lengths`);
+    return row.map((v) => cellOf(v, who));
   });
 }
 
-function cellOf(v: unknown, name: string): CellValue {
+function cellOf(v: unknown, who: string): CellValue {
   if (v === null || v === undefined) return null;
+  if (v instanceof FormulaError) throw v;
   if (typeof v === 'number') {
-    if (!Number.isFinite(v)) throw new Failure('#NUM!', `LOOM.${name} gave ${v}, which a cell cannot hold`);
+    if (Number.isNaN(v)) throw new Failure('#VALUE!', `${who} gave a value that is not a number`);
+    if (!Number.isFinite(v)) throw new Failure('#NUM!', `${who} gave ${v}, which a cell cannot hold`);
     return v;
   }
   if (typeof v === 'string' || typeof v === 'boolean') return v;
-  throw new Failure('#VALUE!', `LOOM.${name} gave a value a cell cannot hold`);
+  throw new Failure('#VALUE!', `${who} gave a value a cell cannot hold`);
 }
 
 /** Any thrown thing as a cell error: the host's error value and message when it carries them. */
 function asFailure(err: unknown): Failure {
   if (err instanceof Failure) return err;
+  if (err instanceof FormulaError) return new Failure(err.error, err.message || defaultMessage(err.error));
   const code = (err as { code?: unknown } | null)?.code;
   const message = err instanceof Error ? err.message : String(err);
   if (typeof code === 'string' && code.startsWith('#')) return new Failure(code, message);
   if (err instanceof InputError) return new Failure('#VALUE!', message);
   return new Failure('#N/A', `could not compute this (${message.split('\n')[0]})`);
+}
+
+/** What an error value means when the formula library gives no message of its own. */
+function defaultMessage(code: string): string {
+  const known: Record<string, string> = {
+    '#DIV/0!': 'division by zero', '#VALUE!': 'a value of the wrong kind (text where a number belongs?)', '#NUM!': 'a number out of range',
+    '#N/A': 'no value available', '#REF!': 'a reference that does not exist', '#NAME?': 'an unknown name', '#NULL!': 'ranges that do not meet',
+  };
+  return known[code] ?? code;
 }

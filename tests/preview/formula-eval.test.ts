@@ -51,14 +51,24 @@ describe('calculate(source, functions, cache)', () => {
   });
 
   it('errors: the function\'s own error value and message, #NAME? for unknown names, #REF! for a cycle or a missing sheet, passed on by references', async () => {
-    const calc = await calculate(source({ S: [['=LOOM.FAIL()', '=A1', '=LOOM.NOPE(1)', '=D1', '=Nope!A1', '=SUM(A1)']] }), FAKE);
+    const calc = await calculate(source({ S: [['=LOOM.FAIL()', '=A1', '=LOOM.NOPE(1)', '=D1', '=Nope!A1', '=SUM(A1)', '=NOPE(1)', '=1 +', '=IFERROR(LOOM.FAIL(), "none")']] }), FAKE);
     expect(calc.result('S', 0, 0)?.error).toEqual({ code: '#VALUE!', message: 'bad input here' });
     expect(calc.result('S', 0, 1)?.error?.code).toBe('#VALUE!');
     expect(calc.result('S', 0, 1)?.error?.message).toMatch(/^S!A1 shows #VALUE!/);
     expect(calc.result('S', 0, 2)?.error?.code).toBe('#NAME?');
     expect(calc.result('S', 0, 3)?.error).toMatchObject({ code: '#REF!', message: expect.stringMatching(/circular/) });
     expect(calc.result('S', 0, 4)?.error?.message).toMatch(/sheet "Nope"/);
-    expect(calc.result('S', 0, 5)?.error?.code).toBe('#NAME?');
+    expect(calc.result('S', 0, 5)?.error).toMatchObject({ code: '#VALUE!', message: expect.stringMatching(/^S!A1 shows #VALUE!/) });
+    expect(calc.result('S', 0, 6)?.error).toEqual({ code: '#NAME?', message: 'NOPE is not a function the preview knows' });
+    expect(calc.result('S', 0, 7)?.error).toMatchObject({ code: '#NAME?', message: expect.stringMatching(/^cannot read the formula/) });
+    expect(calc.result('S', 0, 8)).toEqual({ value: 'none' });
+  });
+
+  it('an error in a cell or range fails the formula that reads it, never a number that skips it; IFERROR and ISERROR see it', async () => {
+    const calc = await calculate(source({ S: [[1, '=LOOM.FAIL()', '=SUM(A1:B1)', '=MAX(A1:B1)', '=LOOM.SUM(A1:B1)', '=SUM(A1, B1)', '=IFERROR(B1, 0) + A1', '=ISERROR(B1)']] }), FAKE);
+    for (const c of [2, 3, 4, 5]) expect(calc.result('S', 0, c)?.error).toMatchObject({ code: '#VALUE!', message: expect.stringMatching(/^S!B1 shows #VALUE!: bad input here/) });
+    expect(calc.result('S', 0, 6)).toEqual({ value: 1 });
+    expect(calc.result('S', 0, 7)).toEqual({ value: true });
   });
 
   it('argument checks: too many, a missing required one, a range where one cell belongs', async () => {
@@ -101,7 +111,64 @@ describe('calculate(source, functions, cache)', () => {
   });
 
   it('Failure carries the error value it shows', () => {
+    // (kept from the hand-written evaluator: the error shape the grid shows)
     const f = new Failure('#NUM!', 'too big');
     expect([f.code, f.message]).toEqual(['#NUM!', 'too big']);
+  });
+});
+
+// What a desk puts around LOOM results, evaluated by the formula libraries
+// (fast-formula-parser, @formulajs/formulajs). Expected values follow the
+// spreadsheet's documented rules, from memory: blank cells are left out of
+// SUM/AVERAGE/MIN/MAX and text in a range is ignored by them; ROUND rounds
+// half away from zero; =A1 of an empty cell shows 0; MIN/MAX of no number is 0.
+describe('calculate: arithmetic, references and the common functions', () => {
+  const grid: CellValue[][] = [
+    [10, 20, null, 'text', -2.5],
+    [2.5, 4, 6, 8, 0.125],
+  ];
+  const at = async (formula: string) => {
+    const sheets = { S: [...grid.map((r) => r.slice()), [formula]] };
+    const calc = await calculate(source(sheets), FAKE);
+    return calc.result('S', 2, 0);
+  };
+
+  it.each([
+    ['=A1+B1*2', 50],
+    ['=(A1+B1)*2', 60],
+    ['=2^10-A2', 1021.5],
+    ['=A1/B1', 0.5],
+    ['=-A1+E1', -12.5],
+    ['=A1&"/"&D1', '10/text'],
+    ['=A1>B1', false],
+    ['=C1', 0],
+    ['=SUM(A1:E2)', 10 + 20 - 2.5 + 2.5 + 4 + 6 + 8 + 0.125],
+    ['=AVERAGE(A1:C1)', 15],
+    ['=MIN(A1:E1)', -2.5],
+    ['=MAX(A1:E2)', 20],
+    ['=MAX(C1:D1)', 0],
+    ['=ROUND(2.5, 0)', 3],
+    ['=ROUND(-2.5, 0)', -3],
+    ['=ROUND(E2, 2)', 0.13],
+    ['=ROUND(AVERAGE(A2:E2), 1)', 4.1],
+    ['=IF(A1>B1, "up", "down")', 'down'],
+    ['=IF(E1<0, ABS(E1), E1)', 2.5],
+    ['=ABS(-A2)', 2.5],
+    ['=SUM(A1:B1) - LOOM.SUM(A2:B2)', 30 - 6.5],
+    ['=ROUND(LOOM.SUM(A1:E2) / 9, 2)', 5.35],
+    ['=S!A1 * 3', 30],
+  ] as [string, CellValue][])('%s gives %s', async (formula, expected) => {
+    const r = await at(formula);
+    expect(r?.error).toBeUndefined();
+    if (typeof expected === 'number') expect(r?.value as number).toBeCloseTo(expected, 12);
+    else expect(r?.value).toBe(expected);
+  });
+
+  it('division by zero shows #DIV/0!; a LOOM spill can be wrapped: =LOOM.SEQ(3) spills, SUM(LOOM.SEQ(3)) adds it', async () => {
+    expect((await at('=A1/0'))?.error?.code).toBe('#DIV/0!');
+    expect(await at('=SUM(LOOM.SEQ(3))')).toEqual({ value: 6 });
+    const calc = await calculate(source({ S: [['=LOOM.SEQ(3)', '=SUM(A1:A3)']] }), FAKE);
+    expect(calc.result('S', 0, 0)).toEqual({ value: 1, spill: { rows: 3, columns: 1 } });
+    expect(calc.result('S', 0, 1)).toEqual({ value: 6 });
   });
 });
