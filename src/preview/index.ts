@@ -12,6 +12,7 @@
  * kept in this origin's localStorage (the preview's "workbook file").
  */
 import '../pane/strict-csp'; // first: before any schema is built (see strict-csp.ts)
+import { addDays, dayStartUtc } from '../engine';
 import { formatA1 } from '../host/a1';
 import { detectHost, hostErrorMessage } from '../host/host-detect';
 import { bindWorkbook } from '../host/model-store';
@@ -81,9 +82,13 @@ function boot(): void {
     h('footer', { class: 'pv-foot', text: `${CAUTION} The preview keeps this workbook in your browser's storage for this page only; nothing is sent anywhere.` }),
   ));
 
-  let pane: PaneHandle = mountPane(paneRoot, port, { defaults });
+  // the demo market lives on its own calendar: its clock starts at 10:00 market time of the day
+  // before its "tomorrow", so an outlook issued in the preview is a fair day-ahead forecast
+  const demoNow = demoClock(demo.tomorrow, demo.zone);
+  let pane: PaneHandle = mountPane(paneRoot, port, { defaults, now: demoNow });
   const remount = (d: typeof defaults) => {
     pane.destroy();
+    // an imported file has its own dates: the real clock then
     pane = mountPane(paneRoot, port, { defaults: d });
   };
 
@@ -150,3 +155,12 @@ function boot(): void {
 }
 
 boot();
+
+/**
+ * A clock that runs from 10:00 market time of the day before `tomorrow`
+ * (UTC ms), at the real pace.
+ */
+export function demoClock(tomorrow: string, zone: string, real: () => number = Date.now): () => number {
+  const offset = dayStartUtc(addDays(tomorrow, -1), zone) + 10 * 3_600_000 - real();
+  return () => real() + offset;
+}

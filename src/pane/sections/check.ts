@@ -3,7 +3,7 @@ import { drawBacktestChart } from '../charts/backtest-chart';
 import type { PaneContext } from '../context';
 import { clear, field, fmt, guarded, h, messageLine } from '../dom';
 import { readArchive } from '../logic/archive';
-import { gradeArchive, type ArchiveGrade } from '../logic/grade-archive';
+import { gradeArchive, gradeSummary, LATE_MEANING, type ArchiveGrade } from '../logic/grade-archive';
 import { jobProgress } from './job-progress';
 import { modelPicker } from './model-picker';
 
@@ -41,15 +41,16 @@ export function checkSection(ctx: PaneContext): HTMLElement {
   }));
 
   const grade = h('button', { class: 'loom-button', type: 'button', test: 'grade-button', text: 'Grade the archive' });
-  grade.addEventListener('click', () => guarded(grade, message, async () => {
+  const gradeMessage = messageLine('grade-message');
+  grade.addEventListener('click', () => guarded(grade, gradeMessage, async () => {
     const data = store.get().data;
     if (!data) throw new InputError('check the data first (Data section): the archive is graded against the prices there');
     const entries = await readArchive(ctx.port);
-    if (entries.length === 0) { clear(gradeBox); message.info('The forecast archive is empty: each outlook refresh in Place adds to it.'); return; }
+    if (entries.length === 0) { clear(gradeBox); gradeMessage.info('The forecast archive is empty: each outlook refresh in Place adds to it.'); return; }
     const grades = gradeArchive(entries, data.series);
     store.set({ grades });
     renderGrades(gradeBox, grades, data.series.zone);
-    message.ok(`Graded ${entries.length} archived periods against the prices in Data.`);
+    gradeMessage.ok(gradeSummary(grades));
   }));
 
   store.subscribe((st, prev) => {
@@ -74,8 +75,8 @@ export function checkSection(ctx: PaneContext): HTMLElement {
     table,
     chartBox,
     h('h3', { text: 'Issued forecasts' }),
-    h('p', { class: 'loom-help', text: 'Grades what was issued (the sheet "Forecast archive") against the prices now in Data: for each period, the last forecast issued before it started.' }),
-    h('div', { class: 'loom-actions' }, grade),
+    h('p', { class: 'loom-help', text: `Grades what was issued (the sheet "Forecast archive") against the prices now in Data: for each period, the last forecast issued before its delivery day began. ${LATE_MEANING[0].toUpperCase()}${LATE_MEANING.slice(1)}; a period whose price is not in Data yet is waiting.` }),
+    h('div', { class: 'loom-actions loom-actions-message' }, grade, gradeMessage.el),
     gradeBox,
   );
 }
@@ -90,7 +91,7 @@ function scoreTable(summaries: BacktestSummary[]): HTMLElement {
       h('td', { text: fmt(s.rmse), data: { metric: 'rmse' } }),
       h('td', { text: fmt(s.smape), data: { metric: 'smape' } }),
       h('td', { text: fmt(s.rmae, 3), data: { metric: 'rmae' } }),
-      h('td', { text: s.coverage === undefined ? '–' : `${fmt(100 * s.coverage, 1)} %`, data: { metric: 'coverage' } }),
+      h('td', { text: share(s.coverage), data: { metric: 'coverage' } }),
     ))),
     h('caption', { text: `${summaries[0]?.days ?? 0} days, ${summaries[0]?.periods ?? 0} periods; rMAE below 1 beats naive-week` }),
   );
@@ -98,20 +99,35 @@ function scoreTable(summaries: BacktestSummary[]): HTMLElement {
 
 function renderGrades(box: HTMLElement, grades: ArchiveGrade[], zone: string): void {
   clear(box);
-  const head = ['issued by', 'periods', 'MAE', 'RMSE', 'sMAPE %', 'bias', 'coverage', 'pending'];
-  box.appendChild(h('table', { class: 'loom-table' },
-    h('thead', {}, h('tr', {}, ...head.map((t) => h('th', { text: t })))),
+  const name = (g: ArchiveGrade) => h('th', { text: g.model, title: g.from !== undefined ? `graded ${formatTimestamp(g.from, zone)} to ${formatTimestamp(g.to!, zone)}` : '' });
+  // two narrow tables rather than one wide one: the pane is about 320 px wide
+  box.appendChild(h('table', { class: 'loom-table loom-table-grades', test: 'grade-counts' },
+    h('thead', {}, h('tr', {}, ...['issued by', 'graded', 'late', 'waiting'].map((t) => h('th', { text: t })))),
     h('tbody', {}, ...grades.map((g) => h('tr', { data: { model: g.model } },
-      h('th', { text: g.model, title: g.from !== undefined ? `${formatTimestamp(g.from, zone)} to ${formatTimestamp(g.to!, zone)}` : '' }),
-      h('td', { text: String(g.periods) }),
+      name(g),
+      h('td', { text: String(g.graded), data: { count: 'graded' } }),
+      h('td', { text: String(g.late), data: { count: 'late' } }),
+      h('td', { text: String(g.waiting), data: { count: 'waiting' } }),
+    ))),
+    h('caption', { text: 'periods of the archive; late: issued after the delivery day began; waiting: no price yet' }),
+  ));
+  box.appendChild(h('table', { class: 'loom-table loom-table-grades', test: 'grade-scores' },
+    h('thead', {}, h('tr', {}, ...['issued by', 'MAE', 'RMSE', 'sMAPE %', 'bias', 'coverage'].map((t) => h('th', { text: t })))),
+    h('tbody', {}, ...grades.map((g) => h('tr', { data: { model: g.model } },
+      name(g),
       h('td', { text: fmt(g.mae), data: { metric: 'mae', value: String(g.mae) } }),
       h('td', { text: fmt(g.rmse) }),
       h('td', { text: fmt(g.smape) }),
       h('td', { text: fmt(g.bias) }),
-      h('td', { text: g.coverage === undefined ? '–' : `${fmt(100 * g.coverage, 1)} %` }),
-      h('td', { text: g.late ? `${g.pending} (+${g.late} late)` : String(g.pending) }),
+      h('td', { text: share(g.coverage) }),
     ))),
+    h('caption', { text: 'scores of the graded periods (n/a until one is graded)' }),
   ));
+}
+
+/** A share as the sheets show it with the number format 0.0% (the same text in pane and sheet). */
+export function share(x: number | undefined): string {
+  return x === undefined || !Number.isFinite(x) ? '–' : `${(100 * x).toFixed(1)}%`;
 }
 
 function wholeNumber(text: string, what: string, min: number): number {

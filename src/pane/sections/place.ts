@@ -118,7 +118,7 @@ function scoreLines(st: PaneState, model: string): ScoreLine[] {
     for (const s of st.backtest.outcome.summaries) lines.push({ name: s.model, mae: s.mae, rmse: s.rmse, smape: s.smape, rmae: s.rmae, coverage: s.coverage, span });
   }
   for (const g of st.grades ?? []) {
-    lines.push({ name: `issued by ${g.model}`, mae: g.mae, rmse: g.rmse, smape: g.smape, rmae: NaN, coverage: g.coverage, span: `archive, ${g.periods} periods` });
+    lines.push({ name: `issued by ${g.model}`, mae: g.mae, rmse: g.rmse, smape: g.smape, rmae: NaN, coverage: g.coverage, span: `archive, ${g.graded} period${g.graded === 1 ? '' : 's'}` });
   }
   return lines;
 }
