@@ -4,7 +4,7 @@ import {
 } from '../../src/engine';
 import { MemoryWorkbook } from '../../src/host/memory-workbook';
 import type { Reply } from '../../src/pane/jobs/protocol';
-import { runJob, testSpanStart, trainFraction } from '../../src/pane/jobs/run-job';
+import { ensembleMember, runJob, testSpanStart, trainFraction } from '../../src/pane/jobs/run-job';
 import { checkData } from '../../src/pane/logic/read-ranges';
 import { historySheet } from './support';
 
@@ -33,7 +33,27 @@ describe('trainFraction(what, done, total)', () => {
   });
 });
 
+describe('ensembleMember(done, iterations)', () => {
+  it('splits the engine\'s epoch count across the ensemble into network and its own epoch', () => {
+    expect(ensembleMember(5, 200)).toEqual({ network: 0, epoch: 5 });
+    expect(ensembleMember(200, 200)).toEqual({ network: 0, epoch: 200 });
+    expect(ensembleMember(201, 200)).toEqual({ network: 1, epoch: 1 });
+    expect(ensembleMember(410, 200)).toEqual({ network: 2, epoch: 10 });
+  });
+});
+
 describe('runJob(job, post)', () => {
+  it('train: each validation loss says which network of the ensemble it belongs to, and that network\'s epochs start again', async () => {
+    const s = await series(130);
+    const settings: LearnerSettings = { ...DEFAULT_LEARNER_SETTINGS, kind: 'neural', network: { ...DEFAULT_LEARNER_SETTINGS.network, hiddenLayers: [4], iterations: 30, ensemble: 2 } };
+    const losses = collect({ type: 'train', series: s, settings, name: 'n' })
+      .filter((r): r is Extract<Reply, { type: 'progress' }> => r.type === 'progress' && r.loss !== undefined);
+    expect(new Set(losses.map((r) => r.network))).toEqual(new Set([0, 1]));
+    const second = losses.filter((r) => r.network === 1);
+    expect(second[0].epoch).toBeLessThanOrEqual(30);
+    expect(second.every((r) => r.done === 30 + r.epoch!)).toBe(true);
+  });
+
   it('train: posts progress, then one trained reply whose text passes the stored-model schema', async () => {
     const s = await series(130);
     const replies = collect({ type: 'train', series: s, settings: LINEAR, name: 'main' });

@@ -29,6 +29,9 @@ export interface ProgressReply {
   total: number;
   /** validation loss (MAE) at a check, when the engine reports it */
   loss?: number;
+  /** with a loss: which network of the ensemble (0-based) and its own epoch count */
+  network?: number;
+  epoch?: number;
 }
 
 /** One test period with every model's forecast beside the actual price. */

@@ -35,7 +35,19 @@ export function runJob(job: Job, post: (reply: Reply) => void): void {
   }
 }
 
-function progressTo(post: (r: Reply) => void, map: (what: string, done: number, total: number) => number) {
+/**
+ * Which network of the ensemble a "network epochs" report is about: the
+ * engine counts epochs across the ensemble, network k running from
+ * k × iterations + 1 to (k + 1) × iterations (Learner.fit).
+ *
+ * @example ensembleMember(205, 200) // { network: 1, epoch: 5 }
+ */
+export function ensembleMember(done: number, iterations: number): { network: number; epoch: number } {
+  const network = Math.max(0, Math.floor((done - 1) / iterations));
+  return { network, epoch: done - network * iterations };
+}
+
+function progressTo(post: (r: Reply) => void, map: (what: string, done: number, total: number) => number, iterations?: number) {
   let lastPosted = 0;
   return (done: number, total: number, what: string, loss?: number) => {
     const now = Date.now();
@@ -43,7 +55,10 @@ function progressTo(post: (r: Reply) => void, map: (what: string, done: number, 
     if (loss === undefined && now - lastPosted < 50 && done < total) return;
     lastPosted = now;
     const reply: ProgressReply = { type: 'progress', fraction: map(what, done, total), what, done, total };
-    if (typeof loss === 'number' && Number.isFinite(loss)) reply.loss = loss;
+    if (typeof loss === 'number' && Number.isFinite(loss)) {
+      reply.loss = loss;
+      if (what === 'network epochs' && iterations) Object.assign(reply, ensembleMember(done, iterations));
+    }
     post(reply);
   };
 }
@@ -53,7 +68,7 @@ function train(job: Extract<Job, { type: 'train' }>, post: (r: Reply) => void): 
   const learner = new Learner(job.settings);
   const frame = inputFrame(job.series);
   if (frame.price.length === 0) throw new InputError('the price range holds no known price to train on');
-  learner.fit(frame, progressTo(post, trainFraction));
+  learner.fit(frame, progressTo(post, trainFraction, job.settings.network.iterations));
   const stored = toStoredModel(learner, { name: job.name, zone: job.series.zone, resolution: job.series.resolution });
   const text = storedModelText(stored);
   post({ type: 'progress', fraction: 1, what: 'done', done: 1, total: 1 });

@@ -87,9 +87,9 @@ export function trainSection(ctx: PaneContext): HTMLElement {
     chart.reset();
     lossNote.textContent = 'The validation loss appears here while the networks train.';
     message.info(`Training a ${checked.settings.kind} model on ${data.series.times.length} periods…`);
-    // the engine counts epochs across the ensemble (network k starts at k × iterations)
+    // one line per network of the ensemble: the worker says which network a loss belongs to
     const done = await trainAndSave(progress.run({ type: 'train', series: data.series, settings: checked.settings, name: modelName }, (p) => {
-      if (p.what === 'network epochs' && p.loss !== undefined) chart.add(p.done, p.loss);
+      if (p.what === 'network epochs' && p.loss !== undefined) chart.add(p.network ?? 0, p.epoch ?? p.done, p.loss);
     }), ctx.shelf, modelName, replacing);
     if (chart.points === 0 && checked.settings.kind !== 'linear') lossNote.textContent = 'This engine version reports no validation loss during training; the final validation MAE is shown below.';
     if (done.status === 'cancelled') { message.info('Training cancelled. Nothing was saved.'); return; }
