@@ -6,10 +6,14 @@
 //
 //   npm run build   production build into dist/
 //   npm start       development build served on https://localhost:3000
-//                   (and the standalone preview on http://localhost:3001)
-import { existsSync } from 'node:fs';
+//                   (and the standalone preview on http://localhost:3001);
+//                   a port that is taken moves to the next free one, and the
+//                   addresses printed are the ones served
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { createServer } from 'node:http';
 import { createRequire } from 'node:module';
+import { createServer as createNetServer } from 'node:net';
+import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { deflateSync } from 'node:zlib';
@@ -94,6 +98,7 @@ function pages() {
 export default async function config(env = {}, argv = {}) {
   const mode = argv.mode ?? (env.WEBPACK_SERVE ? 'development' : 'production');
   const { entries, html } = pages();
+  const ports = env.WEBPACK_SERVE ? await freePorts() : { addin: ADDIN_PORT, preview: PREVIEW_PORT };
   return {
     mode,
     context: root,
@@ -115,19 +120,55 @@ export default async function config(env = {}, argv = {}) {
     plugins: [
       new CustomFunctionsMetadataPlugin({ output: 'functions.json', input: FUNCTIONS_SOURCE }),
       ...html,
-      new CopyWebpackPlugin({ patterns: [...officeCopies(), { from: from('manifest.xml'), to: 'manifest.xml' }] }),
+      new CopyWebpackPlugin({ patterns: [...officeCopies(), { from: from('manifest.xml'), to: 'manifest.xml', transform: (text) => manifestFor(text.toString(), ports.addin) }] }),
       new IconPlugin(),
     ],
-    devServer: env.WEBPACK_SERVE ? await devServer() : undefined,
+    devServer: env.WEBPACK_SERVE ? await devServer(ports) : undefined,
   };
 }
 
+/** The manifest with its addresses on the port the add-in is served from (3000 as written). */
+export function manifestFor(text, port) {
+  return port === ADDIN_PORT ? text : text.replaceAll(`https://localhost:${ADDIN_PORT}`, `https://localhost:${port}`);
+}
+
+/**
+ * True when nothing listens on `port` on this machine's loopback, over IPv4
+ * and (where the machine has it) IPv6: "localhost" may reach either.
+ */
+export async function portIsFree(port) {
+  const tryListen = (host) => new Promise((resolve) => {
+    const probe = createNetServer();
+    probe.once('error', (err) => resolve(err.code === 'EADDRNOTAVAIL' || err.code === 'EAFNOSUPPORT' ? 'absent' : 'taken'));
+    probe.listen({ port, host, exclusive: true }, () => probe.close(() => resolve('free')));
+  });
+  const v4 = await tryListen('127.0.0.1');
+  if (v4 !== 'free') return false;
+  return (await tryListen('::1')) !== 'taken';
+}
+
+/**
+ * The ports `npm start` serves on: 3000 for the add-in and 3001 for the
+ * preview when they are free, else the next free port above each; the
+ * add-in never takes the preview's own port, and the two never share one.
+ */
+export async function freePorts(wanted = { addin: ADDIN_PORT, preview: PREVIEW_PORT }, tries = 200) {
+  const next = async (start, avoid) => {
+    for (let p = start; p < start + tries; p++) if (p !== avoid && (await portIsFree(p))) return p;
+    throw new Error(`no free port between ${start} and ${start + tries - 1}`);
+  };
+  const addin = await next(wanted.addin, wanted.preview);
+  const preview = await next(wanted.preview, addin);
+  return { addin, preview };
+}
+
 /** Development server: HTTPS with trusted localhost certificates, no injected client script. */
-async function devServer() {
+async function devServer(ports) {
+  const manifest = movedManifest(ports.addin);
   return {
     host: 'localhost', // nothing is served beyond this machine
-    port: ADDIN_PORT,
-    server: { type: 'https', options: await httpsOptions() },
+    port: ports.addin,
+    server: { type: 'https', options: await httpsOptions(ports.addin) },
     // the same policy as the pages' meta tag, as a header so that the training worker is under it too
     headers: {
       'Access-Control-Allow-Origin': '*',
@@ -141,10 +182,34 @@ async function devServer() {
     webSocketServer: false,
     static: false,
     onListening(server) {
-      createServer(server.app).listen(PREVIEW_PORT, 'localhost');
-      announce();
+      const preview = createServer(server.app);
+      preview.on('error', (err) => {
+        // taken between the look and the listen: one line, no stack
+        process.stderr.write(`The preview could not be served on port ${ports.preview} (${err.code ?? err.message}); run npm start again.\n`);
+        process.exit(1);
+      });
+      preview.listen(ports.preview, 'localhost', () => announce(ports, manifest));
+      // `npm start` execs webpack, so a stopped npm stops both servers through its signal; should npm
+      // die without one (killed outright), this process is handed to another parent and ends itself
+      const parent = process.ppid;
+      setInterval(() => { if (process.ppid !== parent) process.exit(0); }, 1000).unref();
     },
   };
+}
+
+/**
+ * Where the manifest for the add-in's port is: the repository's own for
+ * 3000; for another port a copy with that port, written to the system's
+ * temporary folder (the repository's file stays as it is).
+ */
+function movedManifest(port) {
+  const own = from('manifest.xml');
+  if (port === ADDIN_PORT) return own;
+  const dir = path.join(tmpdir(), 'spotloom');
+  mkdirSync(dir, { recursive: true });
+  const file = path.join(dir, `manifest-localhost-${port}.xml`);
+  writeFileSync(file, manifestFor(readFileSync(own, 'utf8'), port));
+  return file;
 }
 
 /**
@@ -153,7 +218,7 @@ async function devServer() {
  * first). Elsewhere the browser keeps its own store, so the server uses a
  * self-signed certificate that the user accepts once in the browser.
  */
-async function httpsOptions() {
+async function httpsOptions(port) {
   if (process.platform !== 'win32' && process.platform !== 'darwin') return {};
   try {
     const certs = await import('office-addin-dev-certs');
@@ -161,35 +226,47 @@ async function httpsOptions() {
   } catch (err) {
     process.stderr.write(
       `Could not set up trusted localhost certificates (${err instanceof Error ? err.message : err}); ` +
-        `serving with a self-signed one: open https://localhost:${ADDIN_PORT}/taskpane.html once in your browser and accept it.\n`,
+        `serving with a self-signed one: open https://localhost:${port}/taskpane.html once in your browser and accept it.\n`,
     );
     return {};
   }
 }
 
-function announce() {
-  const manifest = from('manifest.xml');
+/** The steps printed on Linux for the web version of the spreadsheet (README.md repeats them). */
+export const LINUX_STEPS = [
+  'open a workbook in the browser;',
+  'Home > Add-ins > More Add-ins > My Add-ins > Upload My Add-in (or Manage My Add-ins > Upload);',
+  'choose the manifest named above;',
+  'open the Spotloom group on the Home tab and press "Open Spotloom".',
+];
+
+/** The lines `npm start` prints once both servers listen. */
+export function announcement(ports, manifest, platform = process.platform) {
   const preview = existsSync(from('src/preview/index.ts'));
-  const lines = [
-    '',
-    `Add-in: https://localhost:${ADDIN_PORT}/taskpane.html (manifest: ${manifest})`,
-    preview ? `Preview: http://localhost:${PREVIEW_PORT}/preview.html` : `Preview: not built yet (src/preview/index.ts is missing)`,
-  ];
-  if (process.platform === 'win32' || process.platform === 'darwin') {
+  const moved = [ports.addin !== ADDIN_PORT && `add-in on ${ports.addin}`, ports.preview !== PREVIEW_PORT && `preview on ${ports.preview}`].filter(Boolean);
+  const lines = [''];
+  const taken = [ports.addin !== ADDIN_PORT && ADDIN_PORT, ports.preview !== PREVIEW_PORT && PREVIEW_PORT].filter(Boolean);
+  if (moved.length) lines.push(`${taken.length === 1 ? 'Port' : 'Ports'} ${taken.join(' and ')} ${taken.length === 1 ? 'is' : 'are'} taken: serving the ${moved.join(' and the ')}.`);
+  lines.push(
+    `Add-in: https://localhost:${ports.addin}/taskpane.html (manifest: ${manifest})`,
+    preview ? `Preview: http://localhost:${ports.preview}/preview.html` : `Preview: not built yet (src/preview/index.ts is missing)`,
+  );
+  if (platform === 'win32' || platform === 'darwin') {
     lines.push('Sideloading the add-in into the desktop spreadsheet application (set SPOTLOOM_NO_SIDELOAD=1 to skip) ...');
-    if (!process.env.SPOTLOOM_NO_SIDELOAD) sideload(manifest);
   } else {
     lines.push(
       'To try the add-in in the web version of the spreadsheet application:',
-      '  1. open a workbook in the browser;',
-      '  2. Home > Add-ins > More Add-ins > My Add-ins > Upload My Add-in (or Manage My Add-ins > Upload);',
-      `  3. choose ${manifest};`,
-      '  4. open the Spotloom group on the Home tab and press "Open Spotloom".',
-      `  The server's certificate is self-signed: open https://localhost:${ADDIN_PORT}/taskpane.html once in that browser and accept it first.`,
+      ...LINUX_STEPS.map((step, i) => `  ${i + 1}. ${step}`),
+      `  The server's certificate is self-signed: open https://localhost:${ports.addin}/taskpane.html once in that browser and accept it first.`,
     );
   }
-  lines.push('Forecasts are estimates with stated error, not trading advice.', '');
-  process.stdout.write(lines.join('\n') + '\n');
+  lines.push('Forecasts are estimates with stated error, not trading advice.', 'Stop with Ctrl+C.', '');
+  return lines;
+}
+
+function announce(ports, manifest) {
+  process.stdout.write(announcement(ports, manifest).join('\n') + '\n');
+  if ((process.platform === 'win32' || process.platform === 'darwin') && !process.env.SPOTLOOM_NO_SIDELOAD) sideload(manifest);
 }
 
 async function sideload(manifest) {
