@@ -1,6 +1,6 @@
 import { InputError } from '../engine';
 import { formatA1, parseA1, type A1Range } from './a1';
-import type { CellValue, WorkbookPort } from './workbook-port';
+import type { CellValue, NumberFormat, WorkbookPort } from './workbook-port';
 
 /**
  * An in-memory workbook behind the WorkbookPort: sheets are sparse grids
@@ -41,6 +41,8 @@ export interface RecordedChart {
 interface Sheet {
   name: string;
   cells: Map<string, CellValue>;
+  /** number formats by cell; a cell without one is General */
+  formats: Map<string, string>;
 }
 
 export class MemoryWorkbook implements WorkbookPort {
@@ -97,13 +99,28 @@ export class MemoryWorkbook implements WorkbookPort {
     return this.read(address, (_s, _r, _c, v) => v);
   }
 
-  async writeRange(address: string, values: CellValue[][]): Promise<void> {
+  async writeRange(address: string, values: CellValue[][], formats?: NumberFormat[][]): Promise<void> {
     const r = parseA1(address);
     const sheet = this.sheet(r.sheet);
     if (values.length !== r.rows || values.some((row) => row.length !== r.columns)) {
       throw new InputError(`${address} has ${r.rows} × ${r.columns} cells but ${values.length} × ${values[0]?.length ?? 0} values were given`);
     }
+    if (formats && (formats.length !== r.rows || formats.some((row) => row.length !== r.columns))) {
+      throw new InputError(`${address} has ${r.rows} × ${r.columns} cells but ${formats.length} × ${formats[0]?.length ?? 0} number formats were given`);
+    }
     values.forEach((row, i) => row.forEach((v, j) => setCell(sheet, r.row + i, r.column + j, v)));
+    // as in the host, a write without formats leaves the cells' formats as they were
+    formats?.forEach((row, i) => row.forEach((f, j) => {
+      const key = `${r.row + i},${r.column + j}`;
+      if (f === null || f === '' || f === 'General') sheet.formats.delete(key); else sheet.formats.set(key, f);
+    }));
+  }
+
+  /** Number formats of a range (null: General), as the host's numberFormat gives them. */
+  async readFormats(address: string): Promise<NumberFormat[][]> {
+    const r = parseA1(address);
+    const sheet = this.sheet(r.sheet);
+    return Array.from({ length: r.rows }, (_, i) => Array.from({ length: r.columns }, (_, j) => sheet.formats.get(`${r.row + i},${r.column + j}`) ?? null));
   }
 
   async listSheets(): Promise<string[]> {
@@ -206,7 +223,7 @@ export class MemoryWorkbook implements WorkbookPort {
     if (name.trim() === '' || name.length > 31 || /[:\\/?*[\]]/.test(name)) {
       throw new InputError(`"${name}" cannot name a sheet: use 1 to 31 characters without : \\ / ? * [ ]`);
     }
-    const sheet = { name, cells: new Map<string, CellValue>() };
+    const sheet = { name, cells: new Map<string, CellValue>(), formats: new Map<string, string>() };
     this.sheets.push(sheet);
     return sheet;
   }

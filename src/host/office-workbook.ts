@@ -2,7 +2,7 @@ import { InputError } from '../engine';
 import { formatA1, parseA1 } from './a1';
 import { logHostError } from './host-detect';
 import { MODEL_XML_NAMESPACE, modelXml, readModelXml } from './model-xml';
-import type { CellValue, WorkbookPort } from './workbook-port';
+import type { CellValue, NumberFormat, WorkbookPort } from './workbook-port';
 
 /**
  * The WorkbookPort over the host's Excel JavaScript API (Office.js).
@@ -61,16 +61,21 @@ export class OfficeWorkbook implements WorkbookPort {
     return this.readProperty(address, 'formulas');
   }
 
-  async writeRange(address: string, values: CellValue[][]): Promise<void> {
+  async writeRange(address: string, values: CellValue[][], formats?: NumberFormat[][]): Promise<void> {
     const r = parseA1(address);
     if (values.length !== r.rows || values.some((row) => row.length !== r.columns)) {
       throw new InputError(`${address} has ${r.rows} × ${r.columns} cells but ${values.length} × ${values[0]?.length ?? 0} values were given`);
+    }
+    if (formats && (formats.length !== r.rows || formats.some((row) => row.length !== r.columns))) {
+      throw new InputError(`${address} has ${r.rows} × ${r.columns} cells but ${formats.length} × ${formats[0]?.length ?? 0} number formats were given`);
     }
     await this.call(`writing ${address}`, async (context) => {
       for (const block of blocks(r.rows, r.columns)) {
         const range = this.range(context, formatA1({ ...r, row: r.row + block.from, rows: block.rows }));
         // `formulas` takes constants and formulas alike; '' empties a cell (null would leave it unchanged)
         range.formulas = values.slice(block.from, block.from + block.rows).map((row) => row.map((v) => (v === null ? '' : v))) as never;
+        // Range.numberFormat takes one format code per cell; "General" is the host's default
+        if (formats) range.numberFormat = formats.slice(block.from, block.from + block.rows).map((row) => row.map((f) => f ?? 'General'));
         await context.sync();
       }
     });

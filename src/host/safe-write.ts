@@ -1,4 +1,4 @@
-import type { AskUser, CellValue, WorkbookPort } from './workbook-port';
+import type { AskUser, CellValue, NumberFormat, WorkbookPort } from './workbook-port';
 import { rangeSize, resizeAddress } from './a1';
 
 /**
@@ -6,9 +6,10 @@ import { rangeSize, resizeAddress } from './a1';
  * non-empty target cells; when there are any, ask the user, and write
  * nothing unless they agree.
  *
+ * @param formats number formats of the same cells (optional)
  * @returns true when written, false when the user said no
  */
-export async function writeWithConsent(port: WorkbookPort, ask: AskUser, address: string, values: CellValue[][]): Promise<boolean> {
+export async function writeWithConsent(port: WorkbookPort, ask: AskUser, address: string, values: CellValue[][], formats?: NumberFormat[][]): Promise<boolean> {
   const target = resizeAddress(address, values.length, values[0]?.length ?? 0);
   const { rows, columns } = rangeSize(target);
   if (rows === 0 || columns === 0) return true;
@@ -18,6 +19,6 @@ export async function writeWithConsent(port: WorkbookPort, ask: AskUser, address
     const ok = await ask(`${target} already holds ${filled} non-empty cell${filled === 1 ? '' : 's'}. Overwrite ${filled === 1 ? 'it' : 'them'}?`);
     if (!ok) return false;
   }
-  await port.writeRange(target, values);
+  await port.writeRange(target, values, formats);
   return true;
 }

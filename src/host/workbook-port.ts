@@ -14,6 +14,13 @@
  */
 export type CellValue = string | number | boolean | null;
 
+/**
+ * A cell's number format, in the host's format-code language (ECMA-376
+ * Part 1, 18.8.31): `0.00`, `0.0%`, `yyyy-mm-dd hh:mm`; null is the host's
+ * General format.
+ */
+export type NumberFormat = string | null;
+
 export interface WorkbookPort {
   readonly kind: 'office' | 'memory';
   /** the workbook's date system: serial 0 is 1899-12-30 (1900) or 1904-01-01 (1904) */
@@ -24,10 +31,13 @@ export interface WorkbookPort {
   /** formulas of a range (a cell without a formula gives its value) */
   readFormulas(address: string): Promise<CellValue[][]>;
   /**
-   * Writes values; a string beginning with `=` is a formula. Do not call it
-   * directly: every write goes through writeWithConsent (safe-write.ts).
+   * Writes values; a string beginning with `=` is a formula. With `formats`
+   * (the same rows × columns), each cell also gets that number format; the
+   * cells a formula spills into show their own cell's format, so a spill
+   * area is formatted by formatting its cells. Do not call it directly:
+   * every write goes through writeWithConsent (safe-write.ts).
    */
-  writeRange(address: string, values: CellValue[][]): Promise<void>;
+  writeRange(address: string, values: CellValue[][], formats?: NumberFormat[][]): Promise<void>;
   listSheets(): Promise<string[]>;
   /**
    * Address (with sheet) of the sheet's used cells, from A1 to the last

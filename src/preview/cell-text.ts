@@ -1,4 +1,5 @@
-import type { CellValue } from '../host/workbook-port';
+import { hhmm, serialToWallClock } from '../engine';
+import type { CellValue, NumberFormat } from '../host/workbook-port';
 
 /**
  * How the preview grid writes a value in a cell: numbers rounded for the
@@ -6,14 +7,26 @@ import type { CellValue } from '../host/workbook-port';
  * digits), booleans as TRUE/FALSE, empty as nothing. The exact value stays
  * in the cell's data-value attribute and in the formula bar.
  *
+ * A number with a number format shows as the host shows it for the format
+ * codes Spotloom writes (fixed decimals `0.00`, per cent `0.0%`, date-time
+ * `yyyy-mm-dd hh:mm` of a 1900-system serial; ECMA-376 Part 1, 18.8.31);
+ * other codes fall back to the rule above.
+ *
  * @example cellText(41.23456) // '41.23'
  * @example cellText(0.0123456) // '0.01235'
+ * @example cellText(0.8958, '0.0%') // '89.6%'
  */
-export function cellText(v: CellValue): string {
+export function cellText(v: CellValue, format: NumberFormat = null): string {
   if (v === null) return '';
   if (typeof v === 'boolean') return v ? 'TRUE' : 'FALSE';
   if (typeof v === 'string') return v;
   if (!Number.isFinite(v)) return String(v);
+  const fixed = format ? /^0(?:\.(0+))?(%?)$/.exec(format) : null;
+  if (fixed) return fixed[2] ? `${(100 * v).toFixed(fixed[1]?.length ?? 0)}%` : v.toFixed(fixed[1]?.length ?? 0);
+  if (format === 'yyyy-mm-dd hh:mm' && v >= 1) {
+    const wall = serialToWallClock(v);
+    return `${wall.date} ${hhmm(wall.minutes)}`;
+  }
   if (Number.isInteger(v)) return String(v);
   const a = Math.abs(v);
   if (a >= 1e9) return v.toExponential(3);

@@ -145,7 +145,7 @@ export function gridView(port: PreviewWorkbook): GridView {
           classes.push(r === anchor.row && c === anchor.column ? 'pv-sel pv-anchor' : 'pv-sel');
         }
         td.className = classes.join(' ');
-        td.textContent = view.result && !view.result.error && view.value === null ? '' : cellText(view.value);
+        td.textContent = view.result && !view.result.error && view.value === null ? '' : cellText(view.value, view.format);
         tr.appendChild(td);
       }
       body.appendChild(tr);

@@ -1,6 +1,6 @@
 import { formatA1, parseA1, type A1Range } from '../host/a1';
 import { MemoryWorkbook, type RecordedChart } from '../host/memory-workbook';
-import type { CellValue, WorkbookPort } from '../host/workbook-port';
+import type { CellValue, NumberFormat, WorkbookPort } from '../host/workbook-port';
 import { calculate, type Calculation, type CellSource, type FormulaCell, type FormulaResult, type ResultCache } from './formula-eval';
 import { LOOM_FUNCTIONS, type LoomFunction } from './loom-functions';
 import { addBlock, type SavedWorkbook, type WorkbookFile, type WrittenBlock } from './workbook-file';
@@ -42,6 +42,8 @@ export interface CellView {
   value: CellValue;
   result?: FormulaResult;
   spilled: boolean;
+  /** the cell's number format (null: General) */
+  format: NumberFormat;
 }
 
 const EMPTY: Calculation = { result: () => undefined, spilled: () => undefined, touches: () => false, results: () => [] };
@@ -59,6 +61,7 @@ export class PreviewWorkbook implements WorkbookPort {
   private readonly initial = new Set<string>();
   private readonly formulaCells = new Map<string, Map<string, FormulaCell>>();
   private readonly grids = new Map<string, CellValue[][]>();
+  private readonly formatCache = new Map<string, Map<string, string>>();
   private readonly listeners = new Set<(event: PreviewEvent) => void>();
   private blocks: WrittenBlock[] = [];
   private calc: Calculation = EMPTY;
@@ -126,12 +129,13 @@ export class PreviewWorkbook implements WorkbookPort {
     return this.read(address, false);
   }
 
-  async writeRange(address: string, values: CellValue[][]): Promise<void> {
+  async writeRange(address: string, values: CellValue[][], formats?: NumberFormat[][]): Promise<void> {
     const r = parseA1(address);
     const sheet = this.sheetName(r.sheet ?? this.activeSheet()) ?? r.sheet ?? '';
-    await this.book.writeRange(address, values); // checks the address, the sheet and the size
+    await this.book.writeRange(address, values, formats); // checks the address, the sheet and the size
     this.applyTracking(sheet, r.row, r.column, values);
-    this.blocks = addBlock(this.blocks, { sheet, row: r.row, column: r.column, values: values.map((row) => row.map((v) => (v === '' ? null : v))) });
+    this.formatCache.delete(sheet.toLowerCase());
+    this.blocks = addBlock(this.blocks, { sheet, row: r.row, column: r.column, values: values.map((row) => row.map((v) => (v === '' ? null : v))), ...(formats ? { formats } : {}) });
     this.save('blocks', this.blocks);
     this.emit('cells');
     this.schedule();
@@ -232,15 +236,32 @@ export class PreviewWorkbook implements WorkbookPort {
   /** One cell as the grid shows it. */
   cell(sheet: string, row: number, column: number): CellView {
     const raw = this.grid(sheet)[row]?.[column] ?? null;
+    const format = this.format(sheet, row, column);
     if (typeof raw === 'string' && raw.startsWith('=')) {
       const result = this.calc.result(sheet, row, column);
-      return { raw, value: result?.value ?? null, result, spilled: false };
+      return { raw, value: result?.value ?? null, result, spilled: false, format };
     }
     if (raw === null) {
       const v = this.calc.spilled(sheet, row, column);
-      return { raw, value: v ?? null, spilled: v !== undefined };
+      return { raw, value: v ?? null, spilled: v !== undefined, format };
     }
-    return { raw, value: raw, spilled: false };
+    return { raw, value: raw, spilled: false, format };
+  }
+
+  /** The number format of one cell (null: General). */
+  format(sheet: string, row: number, column: number): NumberFormat {
+    const name = this.sheetName(sheet) ?? sheet;
+    const k = name.toLowerCase();
+    let m = this.formatCache.get(k);
+    if (!m) {
+      m = new Map();
+      for (const b of this.blocks) {
+        if (b.sheet.toLowerCase() !== k || !b.formats) continue;
+        b.formats.forEach((line, i) => line.forEach((f, j) => { const at = `${b.row + i},${b.column + j}`; if (f) m!.set(at, f); else m!.delete(at); }));
+      }
+      this.formatCache.set(k, m);
+    }
+    return m.get(`${row},${column}`) ?? null;
   }
 
   /** The used size of a sheet including what its formulas spill. */
@@ -343,7 +364,7 @@ export class PreviewWorkbook implements WorkbookPort {
       return; // a block that no longer fits is left out
     }
     // MemoryWorkbook writes at once; its promise only carries the outcome
-    this.book.writeRange(address, block.values).catch(() => undefined);
+    this.book.writeRange(address, block.values, block.formats).catch(() => undefined);
     this.applyTracking(sheet, block.row, block.column, block.values);
     this.blocks = addBlock(this.blocks, block);
   }

@@ -1,4 +1,4 @@
-import type { CellValue } from '../host/workbook-port';
+import type { CellValue, NumberFormat } from '../host/workbook-port';
 
 /**
  * The preview's "workbook file": what a real workbook would carry when saved,
@@ -26,6 +26,8 @@ export interface WrittenBlock {
   row: number;
   column: number;
   values: CellValue[][];
+  /** number formats of the same cells, when the write carried them */
+  formats?: NumberFormat[][];
 }
 
 export interface SavedChart {
@@ -132,5 +134,9 @@ function isBlock(v: unknown): v is WrittenBlock {
   const values = v.values;
   if (!Array.isArray(values) || values.length === 0 || !Array.isArray(values[0])) return false;
   const width = (values[0] as unknown[]).length;
-  return width > 0 && values.every((row) => Array.isArray(row) && row.length === width && row.every(isCell));
+  if (!(width > 0 && values.every((row) => Array.isArray(row) && row.length === width && row.every(isCell)))) return false;
+  const formats = v.formats;
+  if (formats === undefined) return true;
+  return Array.isArray(formats) && formats.length === values.length
+    && formats.every((row) => Array.isArray(row) && row.length === width && row.every((f) => f === null || (typeof f === 'string' && f.length < 64)));
 }

@@ -22,6 +22,15 @@ describe('MemoryWorkbook', () => {
     expect(await new MemoryWorkbook({ sheets: { S: [['=1+1']] } }).readRange('S!A1')).toEqual([[null]]);
   });
 
+  it('number formats: written with the values, kept by a later write without formats (as the host keeps them), General as null', async () => {
+    const wb = new MemoryWorkbook({ sheets: { S: [] } });
+    await wb.writeRange('S!A1:B1', [[41.5, 0.9]], [['0.00', '0.0%']]);
+    await wb.writeRange('S!A1', [[42]]);
+    expect(await wb.readFormats('S!A1:C1')).toEqual([['0.00', '0.0%', null]]);
+    await wb.writeRange('S!B1', [[0.8]], [['General']]);
+    expect(await wb.readFormats('S!B1')).toEqual([[null]]);
+  });
+
   it('writeRange must fit its address; null and empty text empty a cell', async () => {
     const wb = new MemoryWorkbook({ sheets: { S: [[1, 2]] } });
     await expect(wb.writeRange('S!A1:B1', [[1]])).rejects.toThrow(/has 1 × 2 cells but 1 × 1 values/);

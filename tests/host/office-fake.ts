@@ -25,6 +25,8 @@ export interface FakeExcel {
   syncs: number;
   calculations: string[];
   requests: { address: string; cells: number }[];
+  /** number formats written, by 'Sheet!A1' */
+  formats: Map<string, string>;
 }
 
 export function fakeExcel(init: {
@@ -32,7 +34,7 @@ export function fakeExcel(init: {
   /** formula cell → the range it spills into, e.g. { 'Outlook!B13': 'Outlook!B13:B36' } (the host's dynamic arrays, from memory) */
   spills?: Record<string, string>;
 } = {}): FakeExcel {
-  const state: FakeExcel = { Excel: undefined, sheets: new Map(), parts: [...(init.parts ?? [])], charts: [], syncs: 0, calculations: [], requests: [] };
+  const state: FakeExcel = { Excel: undefined, sheets: new Map(), parts: [...(init.parts ?? [])], charts: [], syncs: 0, calculations: [], requests: [], formats: new Map() };
   for (const [name, grid] of Object.entries(init.sheets ?? { Sheet1: [] })) {
     const cells = new Map<string, CellValue>();
     grid.forEach((row, r) => row.forEach((v, c) => v !== null && v !== '' && cells.set(`${r},${c}`, v)));
@@ -61,6 +63,10 @@ export function fakeExcel(init: {
     state.requests.push({ address: formatA1({ ...r, sheet }), cells: r.rows * r.columns });
     addresses.set(mock, formatA1({ ...r, sheet }));
     atSync.push(() => {
+      const numberFormat = (mock as unknown as { numberFormat?: unknown }).numberFormat;
+      if (Array.isArray(numberFormat)) {
+        (numberFormat as string[][]).forEach((row, i) => row.forEach((f, j) => state.formats.set(formatA1({ sheet, row: r.row + i, column: r.column + j, rows: 1, columns: 1 }), f)));
+      }
       const written = (mock as unknown as { formulas: unknown }).formulas;
       if (written !== grid && Array.isArray(written) && cells) {
         (written as CellValue[][]).forEach((row, i) => row.forEach((v, j) => {

@@ -33,6 +33,14 @@ describe('OfficeWorkbook (office-addin-mock)', () => {
     await expect(wb.writeRange('Out!A1:B1', [[1]])).rejects.toThrow(/has 1 × 2 cells but 1 × 1 values/);
   });
 
+  it('writeRange with number formats sets Range.numberFormat per cell, General where none is given', async () => {
+    const fake = fakeExcel({ sheets: { Out: [] } });
+    const wb = connect(fake);
+    await wb.writeRange('Out!A1:B1', [[41.5, 0.9]], [['0.00', null]]);
+    expect([fake.formats.get('Out!A1'), fake.formats.get('Out!B1')]).toEqual(['0.00', 'General']);
+    await expect(wb.writeRange('Out!A1:B1', [[1, 2]], [['0.00']])).rejects.toThrow(/1 × 1 number formats/);
+  });
+
   it('large ranges go to the host in blocks of rows', async () => {
     const fake = fakeExcel({ sheets: { Big: [] } });
     const wb = connect(fake);

@@ -43,6 +43,11 @@ describe('appendToArchive(port, issue, rows)', () => {
     expect(await port.listSheets()).toContain(ARCHIVE_SHEET);
     expect(snapshot(port)[0]).toEqual(ARCHIVE_HEADER);
     expect(snapshot(port).length).toBe(25);
+    // prices with two decimals; the header and the exact times as text stay General
+    expect(await port.readFormats("'Forecast archive'!A1:H2")).toEqual([
+      [null, null, null, null, null, null, null, null],
+      [null, null, null, null, null, '0.00', '0.00', '0.00'],
+    ]);
   });
 
   it('appends below the last used row and never changes a row that was there', async () => {

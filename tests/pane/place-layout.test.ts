@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { formatTimestamp } from '../../src/engine';
 import { parseA1 } from '../../src/host/a1';
 import { MemoryWorkbook } from '../../src/host/memory-workbook';
 import { writeWithConsent } from '../../src/host/safe-write';
 import { BACKTEST_HEADER, FORECAST_HEADER, formulaBlock, valuesBlock, type ForecastRow, type ScoredRow } from '../../src/pane/logic/place-layout';
+import { timeCell } from '../../src/pane/logic/number-formats';
 import type { DataLayout } from '../../src/pane/logic/read-ranges';
 
 const ZONE = 'Europe/Berlin';
@@ -14,36 +14,38 @@ const backtest: ScoredRow[] = Array.from({ length: 48 }, (_, i) => ({ time: t0 -
 
 describe('valuesBlock(input)', () => {
   it('writes a header and one row per period at the anchor; unknown band values are empty cells', () => {
-    const block = valuesBlock({ anchor: 'Forecast!B3', zone: ZONE, rows });
+    const block = valuesBlock({ anchor: 'Forecast!B3', zone: ZONE, dateSystem: '1900', rows });
     expect(block.address).toBe('Forecast!B3:E27');
     expect(block.values[0]).toEqual(FORECAST_HEADER);
-    expect(block.values[1]).toEqual(['2025-06-02T00:00:00+02:00', 40, 30, 50]);
-    expect(block.values[4]).toEqual([formatTimestamp(rows[3].time, ZONE), 43, '', 53]);
+    expect(block.values[1]).toEqual([45810, 40, 30, 50]); // 2025-06-02 00:00 is serial 45810 in the 1900 date system
+    expect(block.formats[0]).toEqual([null, null, null, null]);
+    expect(block.formats[1]).toEqual(['yyyy-mm-dd hh:mm', '0.00', '0.00', '0.00']);
+    expect(block.values[4]).toEqual([45810 + 3 / 24, 43, '', 53]);
   });
 
   it('refuses an empty forecast', () => {
-    expect(() => valuesBlock({ anchor: 'A1', zone: ZONE, rows: [] })).toThrow(/no forecast/);
+    expect(() => valuesBlock({ anchor: 'A1', zone: ZONE, dateSystem: '1900', rows: [] })).toThrow(/no forecast/);
   });
 });
 
 describe('formulaBlock(input)', () => {
   it('puts =LOOM.AHEAD and =LOOM.BAND in the first period row and leaves their spill cells empty', () => {
-    const block = formulaBlock({ anchor: 'Forecast!A1', zone: ZONE, rows, model: 'main', coverage: 0.9, data });
+    const block = formulaBlock({ anchor: 'Forecast!A1', zone: ZONE, dateSystem: '1900', rows, model: 'main', coverage: 0.9, data });
     expect(block.address).toBe('Forecast!A1:D25');
     expect(block.values[1][1]).toBe('=LOOM.AHEAD("main", History!$A$2:$A$900, History!$B$2:$B$900, History!$A$2:$A$900, History!$C$2:$D$900)');
     expect(block.values[1][2]).toBe('=LOOM.BAND("main", History!$A$2:$A$900, History!$B$2:$B$900, History!$A$2:$A$900, History!$C$2:$D$900, 0.9)');
     for (let i = 2; i <= 24; i++) expect(block.values[i].slice(1)).toEqual(['', '', '']);
-    expect(block.values.slice(1).map((r) => r[0])).toEqual(rows.map((r) => formatTimestamp(r.time, ZONE)));
+    expect(block.values.slice(1).map((r) => r[0])).toEqual(rows.map((r) => timeCell(r.time, ZONE, '1900')));
   });
 
   it('leaves the driver arguments out when the data has no driver range', () => {
-    const block = formulaBlock({ anchor: 'A1', zone: ZONE, rows, model: 'm', coverage: 0.8, data: { ...data, drivers: [], driverNames: [] } });
+    const block = formulaBlock({ anchor: 'A1', zone: ZONE, dateSystem: '1900', rows, model: 'm', coverage: 0.8, data: { ...data, drivers: [], driverNames: [] } });
     expect(block.values[1][1]).toBe('=LOOM.AHEAD("m", History!$A$2:$A$900, History!$B$2:$B$900)');
     expect(block.values[1][2]).toBe('=LOOM.BAND("m", History!$A$2:$A$900, History!$B$2:$B$900, , , 0.8)');
   });
 
   it('with a backtest: its columns sit right of the block and the =LOOM.SCORE rows read exactly those cells', () => {
-    const block = formulaBlock({ anchor: 'Forecast!B2', zone: ZONE, rows, model: 'main', coverage: 0.9, data, backtest });
+    const block = formulaBlock({ anchor: 'Forecast!B2', zone: ZONE, dateSystem: '1900', rows, model: 'main', coverage: 0.9, data, backtest });
     const top = parseA1(block.address);
     expect(top.columns).toBe(FORECAST_HEADER.length + 1 + BACKTEST_HEADER.length);
     expect(top.rows).toBe(Math.max(1 + 24 + 5, 1 + 48));
@@ -62,13 +64,13 @@ describe('formulaBlock(input)', () => {
   });
 
   it('refuses drivers split over several ranges, since one formula takes one range', () => {
-    expect(() => formulaBlock({ anchor: 'A1', zone: ZONE, rows, model: 'm', coverage: 0.9, data: { ...data, drivers: ['History!C2:C900', 'Other!A2:A900'] } }))
+    expect(() => formulaBlock({ anchor: 'A1', zone: ZONE, dateSystem: '1900', rows, model: 'm', coverage: 0.9, data: { ...data, drivers: ['History!C2:C900', 'Other!A2:A900'] } }))
       .toThrow(/side by side in one range/);
   });
 
   it('placed through writeWithConsent: asks before overwriting a non-empty cell and writes nothing on no', async () => {
     const port = new MemoryWorkbook({ sheets: { Forecast: [[], [null, null, 'keep me']] } });
-    const block = formulaBlock({ anchor: 'Forecast!A1', zone: ZONE, rows, model: 'main', coverage: 0.9, data });
+    const block = formulaBlock({ anchor: 'Forecast!A1', zone: ZONE, dateSystem: '1900', rows, model: 'main', coverage: 0.9, data });
     const questions: string[] = [];
     const written = await writeWithConsent(port, async (q) => { questions.push(q); return false; }, block.address, block.values);
     expect(written).toBe(false);

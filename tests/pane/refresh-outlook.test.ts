@@ -6,7 +6,7 @@ import { refreshOutlook } from '../../src/pane/logic/refresh-outlook';
 
 const t0 = Date.parse('2025-06-02T00:00:00+02:00');
 const input = (issuedAt: number): OutlookInput => ({
-  model: 'main', coverage: 0.9, issuedAt, zone: 'Europe/Berlin',
+  model: 'main', coverage: 0.9, issuedAt, zone: 'Europe/Berlin', dateSystem: '1900',
   rows: Array.from({ length: 24 }, (_, i) => ({ time: t0 + i * 3_600_000, forecast: 40 + i, lower: 35 + i, upper: 45 + i })),
   data: { times: 'History!A2:A900', prices: 'History!B2:B900', drivers: [], driverNames: [], rows: 899 },
   scores: [],

@@ -16,6 +16,20 @@ describe('cellText(value)', () => {
   });
 });
 
+describe('cellText(value, format)', () => {
+  // what the host shows for these format codes (ECMA-376 Part 1, 18.8.31; from memory)
+  it('fixed decimals, per cent and the date-time of a 1900-system serial', () => {
+    expect(cellText(41.005, '0.00')).toBe('41.01');
+    expect(cellText(7, '0.00')).toBe('7.00');
+    expect(cellText(0.62345, '0.000')).toBe('0.623');
+    expect(cellText(0.8958, '0.0%')).toBe('89.6%');
+    expect(cellText(1, '0.0%')).toBe('100.0%');
+    expect(cellText(45956 + 2 / 24, 'yyyy-mm-dd hh:mm')).toBe('2025-10-26 02:00');
+    expect(cellText('text', '0.00')).toBe('text');
+    expect(cellText(41.23456, 'some other code')).toBe('41.23');
+  });
+});
+
 describe('typedValue(text)', () => {
   it('turns typed text into a formula, a number (. decimal), a boolean, empty or text', () => {
     expect(typedValue('=LOOM.HOLIDAY("2026-10-03", "DE")')).toBe('=LOOM.HOLIDAY("2026-10-03", "DE")');

@@ -1,13 +1,17 @@
 import { formatTimestamp, InputError, parseTimestamp } from '../../engine';
 import { columnName, MAX_ROWS } from '../../host/a1';
 import { writeWithConsent } from '../../host/safe-write';
-import type { CellValue, WorkbookPort } from '../../host/workbook-port';
+import type { CellValue, NumberFormat, WorkbookPort } from '../../host/workbook-port';
+import { PRICE_FORMAT } from './number-formats';
 import { cellNumber, type ForecastRow } from './place-layout';
 
 /**
  * The issued-forecast archive: one sheet, one row per issued period, only
  * ever appended to. Live LOOM cells recompute when new prices arrive; the
  * archive keeps what the desk actually issued, so it can be graded later.
+ * Its times stay text with the market's UTC offset (ISO 8601): a record
+ * must name each instant exactly, and a wall-clock date-time cell cannot
+ * tell the two 02:00 of an autumn night apart. Prices carry two decimals.
  */
 export const ARCHIVE_SHEET = 'Forecast archive';
 export const ARCHIVE_HEADER = ['issued at', 'model', 'model created', 'model version', 'delivery start', 'forecast', 'lower', 'upper'];
@@ -102,7 +106,8 @@ export async function appendToArchive(port: WorkbookPort, issue: Issue, rows: Fo
   const top = last + 2; // 1-based row below the last used one
   if (top + values.length - 1 > MAX_ROWS) throw new InputError(`the sheet "${ARCHIVE_SHEET}" is full; start a new workbook for the archive`);
   const address = `${quoteSheet(ARCHIVE_SHEET)}!A${top}:${columnName(WIDTH - 1)}${top + values.length - 1}`;
-  const written = await writeWithConsent(port, async () => false, address, values);
+  const formats: NumberFormat[][] = values.map((row, i) => row.map((_, c) => (last < 0 && i === 0) || c < 5 ? null : PRICE_FORMAT));
+  const written = await writeWithConsent(port, async () => false, address, values, formats);
   if (!written) throw new InputError(`the rows below the archive's last row (${address}) are not empty; the archive was left as it is`);
   return address;
 }

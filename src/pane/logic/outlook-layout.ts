@@ -1,6 +1,7 @@
 import { formatTimestamp, InputError } from '../../engine';
-import type { CellValue } from '../../host/workbook-port';
+import type { CellValue, NumberFormat } from '../../host/workbook-port';
 import { loomCall } from './formula-text';
+import { DATETIME_FORMAT, PRICE_FORMAT, RATIO_FORMAT, SHARE_FORMAT, timeCell } from './number-formats';
 import { cellNumber, type ForecastRow } from './place-layout';
 import type { DataLayout } from './read-ranges';
 
@@ -42,6 +43,8 @@ export interface OutlookInput {
   coverage: number;
   issuedAt: number;
   zone: string;
+  /** the workbook's date system, for the date-time cells */
+  dateSystem: '1900' | '1904';
   /** tomorrow's periods (their start times fill the first column) */
   rows: ForecastRow[];
   data: DataLayout;
@@ -51,6 +54,8 @@ export interface OutlookInput {
 export interface OutlookLayout {
   frame: string;
   values: CellValue[][];
+  /** number formats of the frame's cells */
+  formats: NumberFormat[][];
   /** the table the native chart draws: header row plus one row per period */
   chart: { sheet: string; address: string; title: string };
 }
@@ -65,22 +70,28 @@ export function outlookLayout(input: OutlookInput): OutlookLayout {
   if (rows.length > MAX_PERIODS) throw new InputError(`tomorrow has ${rows.length} periods; the outlook holds at most ${MAX_PERIODS}`);
   if (data.drivers.length > 1) throw new InputError('the outlook formulas need all driver columns side by side in one range');
   const values: CellValue[][] = Array.from({ length: TABLE_ROW + 1 + MAX_PERIODS }, () => new Array<CellValue>(WIDTH).fill(''));
+  const formats: NumberFormat[][] = values.map((row) => row.map(() => null));
   const put = (r: number, cells: CellValue[]) => cells.forEach((v, c) => (values[r][c] = v));
+  const time = (t: number) => timeCell(t, zone, input.dateSystem);
 
-  put(0, ['Spotloom outlook', `model ${model}`, '', 'issued', formatTimestamp(input.issuedAt, zone)]);
+  // the issue time as text with its offset, exact to the second (the archive keeps it the same way)
+  put(0, ['Spotloom outlook', `model ${model}`, '', 'issued', formatTimestamp(input.issuedAt, zone), `times in ${zone}`]);
   put(1, [CAUTION]);
   put(SCORE_ROW, ['recent scores', 'MAE', 'RMSE', 'sMAPE %', 'rMAE', 'coverage', 'scored on']);
   if (input.scores.length === 0) put(SCORE_ROW + 1, ['none yet: run a backtest in Check']);
   input.scores.slice(0, SCORE_SLOTS).forEach((s, k) => put(SCORE_ROW + 1 + k, [
     s.name, cellNumber(s.mae), cellNumber(s.rmse), cellNumber(s.smape), cellNumber(s.rmae), s.coverage === undefined ? '' : cellNumber(s.coverage), s.span,
   ]));
+  for (let k = 0; k < SCORE_SLOTS; k++) [null, PRICE_FORMAT, PRICE_FORMAT, PRICE_FORMAT, RATIO_FORMAT, SHARE_FORMAT, null].forEach((f, c) => (formats[SCORE_ROW + 1 + k][c] = f));
 
   const drivers = data.drivers[0];
   const args = [{ ref: data.times }, { ref: data.prices }, drivers ? { ref: data.times } : undefined, drivers ? { ref: drivers } : undefined];
   put(TABLE_ROW, OUTLOOK_COLUMNS);
-  rows.forEach((r, i) => put(TABLE_ROW + 1 + i, [formatTimestamp(r.time, zone)]));
+  rows.forEach((r, i) => put(TABLE_ROW + 1 + i, [time(r.time)]));
+  // the whole table area carries its formats: the spilled cells show their own cell's format
+  for (let i = 0; i < MAX_PERIODS; i++) [DATETIME_FORMAT, PRICE_FORMAT, PRICE_FORMAT, PRICE_FORMAT, PRICE_FORMAT, PRICE_FORMAT, null].forEach((f, c) => (formats[TABLE_ROW + 1 + i][c] = f));
   put(TABLE_ROW + 1, [
-    formatTimestamp(rows[0].time, zone),
+    time(rows[0].time),
     loomCall('AHEAD', [model, ...args]),
     loomCall('BAND', [model, ...args, coverage]),
     '',
@@ -90,6 +101,7 @@ export function outlookLayout(input: OutlookInput): OutlookLayout {
   return {
     frame: OUTLOOK_FRAME,
     values,
+    formats,
     chart: { sheet: OUTLOOK_SHEET, address: `${OUTLOOK_SHEET}!A${TABLE_ROW + 1}:F${TABLE_ROW + 1 + rows.length}`, title: 'Tomorrow: forecast, band and baselines' },
   };
 }

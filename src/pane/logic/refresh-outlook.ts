@@ -14,7 +14,7 @@ import { OUTLOOK_SHEET, outlookLayout, type OutlookInput } from './outlook-layou
 export async function refreshOutlook(port: WorkbookPort, ask: AskUser, input: OutlookInput, issue: Omit<Issue, 'issuedAt' | 'zone'>): Promise<string | undefined> {
   const layout = outlookLayout(input);
   await port.ensureSheet(OUTLOOK_SHEET);
-  if (!(await writeWithConsent(port, ask, layout.frame, layout.values))) return undefined;
+  if (!(await writeWithConsent(port, ask, layout.frame, layout.values, layout.formats))) return undefined;
   await port.addLineChart(layout.chart.sheet, layout.chart.address, layout.chart.title);
   return appendToArchive(port, { ...issue, issuedAt: input.issuedAt, zone: input.zone }, input.rows);
 }

@@ -41,13 +41,14 @@ export function placeSection(ctx: PaneContext): HTMLElement {
     // LOOM.AHEAD spills the next delivery day; fixed values may cover every day that has driver rows
     const days = mode.value === 'values' ? ahead.days : ahead.days.slice(0, 1);
     const rows = mode.value === 'values' ? ahead.rows : rowsOfDay(ahead.rows, days[0], data.series.zone);
+    const dateSystem = await port.dateSystem();
     const block = mode.value === 'values'
-      ? valuesBlock({ anchor, zone: data.series.zone, rows })
-      : formulaBlock({ anchor, zone: data.series.zone, rows, model: entry.name, coverage: entry.stored!.settings.coverage, data: data.layout, backtest: backtestRows(store.get(), entry.name) });
-    const written = await writeWithConsent(port, ask, block.address, block.values);
+      ? valuesBlock({ anchor, zone: data.series.zone, rows, dateSystem })
+      : formulaBlock({ anchor, zone: data.series.zone, dateSystem, rows, model: entry.name, coverage: entry.stored!.settings.coverage, data: data.layout, backtest: backtestRows(store.get(), entry.name) });
+    const written = await writeWithConsent(port, ask, block.address, block.values, block.formats);
     if (!written) { message.info('Nothing was written.'); return; }
     const scoreNote = mode.value === 'formulas' && !backtestRows(store.get(), entry.name) ? ' Run a backtest in Check first to add =LOOM.SCORE rows.' : '';
-    message.ok(`Wrote ${rows.length} periods for ${days.join(', ')} to ${block.address}.${scoreNote}`);
+    message.ok(`Wrote ${rows.length} period${rows.length === 1 ? '' : 's'} for ${days.join(', ')} to ${block.address}.${scoreNote}`);
   }));
 
   const refresh = h('button', { class: 'loom-button loom-button-main', type: 'button', test: 'outlook-button', text: 'Refresh outlook' });
@@ -60,11 +61,11 @@ export function placeSection(ctx: PaneContext): HTMLElement {
     const firstDay = rowsOfDay(rows, days[0], data.series.zone);
     const issuedAt = Math.floor(ctx.now() / 1000) * 1000; // whole seconds in the archive
     const archived = await refreshOutlook(port, ask, {
-      model: entry.name, coverage: stored.settings.coverage, issuedAt, zone: data.series.zone,
+      model: entry.name, coverage: stored.settings.coverage, issuedAt, zone: data.series.zone, dateSystem: await port.dateSystem(),
       rows: firstDay, data: data.layout, scores: scoreLines(st, entry.name),
     }, { model: entry.name, created: stored.createdAt, version: modelVersion(stored.version, storedModelText(stored)) });
     if (!archived) { message.info('The Outlook sheet was left as it was; nothing was archived.'); return; }
-    message.ok(`Outlook rebuilt for ${days[0]} (${firstDay.length} periods); the issued forecast was appended to ${archived}.`);
+    message.ok(`Outlook rebuilt for ${days[0]} (${firstDay.length} period${firstDay.length === 1 ? '' : 's'}); the issued forecast was appended to ${archived}.`);
   }));
 
   const freezeSheetsBox = h('input', { type: 'text', test: 'freeze-sheets', placeholder: 'all sheets' });
