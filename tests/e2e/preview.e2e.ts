@@ -53,6 +53,12 @@ function down(cell: string, rows: number): string {
   return `${m[1] ?? ''}${m[2]}${m[3]}:${m[2]}${Number(m[3]) + rows - 1}`;
 }
 
+/** The same ISO time `n` days away, offset kept (the days used here are not DST days). */
+function addDay(iso: string, n: number): string {
+  const d = new Date(Date.parse(`${iso.slice(0, 10)}T00:00:00Z`) + n * 86_400_000).toISOString().slice(0, 10);
+  return `${d}${iso.slice(10)}`;
+}
+
 async function shot(name: string, what: 'pane' | 'page' | 'workbook' = 'pane'): Promise<void> {
   const path = join(SHOTS, `${name}.png`);
   if (what === 'page') { await page.screenshot({ path }); return; }
@@ -199,12 +205,15 @@ describe('the standalone preview in a real browser', () => {
     expect(await page.locator('[data-test="train-button"]').isEnabled()).toBe(true);
   });
 
-  it('Train: a small model trains to the end and is saved in the workbook', async () => {
+  it('Train: a small model trains to the end and is saved in the workbook; the loss chart has one line per network', async () => {
     await page.fill('[data-test="iterations"]', '20');
-    await page.fill('[data-test="ensemble"]', '1');
+    await page.fill('[data-test="ensemble"]', '2');
     await page.click('[data-test="train-button"]');
     const done = await outcome('train-message');
     expect(done.kind, done.text).toBe('ok');
+    await page.waitForSelector('[data-test="loss-chart"][data-networks="2"]');
+    const legend = await page.locator('[data-test="loss-chart"] .u-legend .u-series').allTextContents();
+    expect(legend.map((t) => t.trim()).filter((t) => t.startsWith('network'))).toEqual(['network 1', 'network 2']);
     expect(await page.locator('[data-test="trained-name"]').textContent()).toBe(MODEL_NAME);
     expect(await progressValue()).toBe(1);
     expect(await pv.models()).toEqual([MODEL_NAME]);
@@ -317,6 +326,46 @@ describe('the standalone preview in a real browser', () => {
     await shot('09-outlook-refreshed', 'workbook');
   });
 
+  it('Check: grading the archive counts graded, late and waiting periods, beside the button', async () => {
+    // two forecasts a colleague issued the day before for periods with known prices, and one issued on its delivery day (late)
+    const day = String(history[demo.rows.lastPrice - 1][0]).slice(0, 10);
+    const periods = history.slice(1).filter((r) => String(r[0]).startsWith(day));
+    const issuedBefore = `${String(periods[0][0]).slice(0, 10)}T10:00:00${String(periods[0][0]).slice(19)}`;
+    const offset = String(periods[0][0]).slice(19);
+    const typed = [
+      [`'${addDay(issuedBefore, -1)}`, 'desk', '', '', String(periods[6][0]), String(Number(periods[6][1]) + 2), '', ''],
+      [`'${addDay(issuedBefore, -1)}`, 'desk', '', '', String(periods[7][0]), String(Number(periods[7][1]) - 4), '', ''],
+      [`${day}T12:00:00${offset}`, 'desk', '', '', String(periods[18][0]), '55', '', ''],
+    ];
+    const archived = await pv.readFormulas("'Forecast archive'!A1:A200");
+    let row = archived.findIndex((r) => r[0] === null) + 1;
+    for (const line of typed) {
+      for (let c = 0; c < line.length; c++) {
+        if (line[c] === '') continue;
+        await pv.lookAt(`'Forecast archive'!${'ABCDEFGH'[c]}${row}`);
+        await page.fill('[data-test="formula-input"]', line[c].replace(/^'/, ''));
+        await page.press('[data-test="formula-input"]', 'Enter');
+      }
+      row++;
+    }
+    await pv.settled();
+    const waiting = archived.filter((r, i) => i > 0 && r[0] !== null).length;
+    await page.click('[data-test="tab-check"]');
+    await page.click('[data-test="grade-button"]');
+    const done = await outcome('grade-message');
+    expect(done.kind, done.text).toBe('ok');
+    expect(done.text).toBe(`Of ${3 + waiting} periods in the archive: graded 2 periods, 1 late (issued after its delivery day had begun), ${waiting} waiting for their prices.`);
+    const counts = async (model: string) => page.locator(`[data-test="grade-counts"] tr[data-model="${model}"] td`).allTextContents();
+    expect(await counts('desk')).toEqual(['2', '1', '0']);
+    expect(await counts(MODEL_NAME)).toEqual(['0', '0', String(waiting)]);
+    const mae = Number(await page.locator('[data-test="grade-scores"] tr[data-model="desk"] td[data-metric="mae"]').getAttribute('data-value'));
+    expect(mae).toBeCloseTo((2 + 4) / 2, 9);
+    // the message sits in the same row as the button
+    const [button, line] = [await page.locator('[data-test="grade-button"]').boundingBox(), await page.locator('[data-test="grade-message"]').boundingBox()];
+    expect(line!.y).toBeLessThan(button!.y + button!.height);
+    await shot('09b-check-grades');
+  });
+
   it('Models: after a reload the saved model, the placed block and the chart are still in the workbook', async () => {
     const before = await pv.fingerprint();
     await page.reload();
@@ -329,6 +378,36 @@ describe('the standalone preview in a real browser', () => {
     await page.locator('[data-test="sheet-tab"][data-sheet="Outlook"]').click();
     await page.waitForSelector('[data-test="sheet-chart"] canvas');
     await shot('10-models');
+  });
+
+  it('Place: "Freeze to values" asks, then leaves no LOOM formula on any sheet, with the values that were shown, and lists what it froze', async () => {
+    await pv.settled();
+    const shownBefore = await pv.readRange('Outlook!B13:B36');
+    const loomLeft = async () => {
+      const left: string[] = [];
+      for (const sheet of await page.evaluate(() => (window as unknown as { spotloomPreview: { sheets(): string[] } }).spotloomPreview.sheets())) {
+        const grid = await page.evaluate((s) => (window as unknown as { spotloomPreview: { grid(s: string): unknown[][] } }).spotloomPreview.grid(s), sheet);
+        grid.forEach((r, i) => r.forEach((v, j) => { if (typeof v === 'string' && /^=.*LOOM\./i.test(v)) left.push(`${sheet} row ${i + 1} col ${j + 1}`); }));
+      }
+      return left;
+    };
+    expect((await loomLeft()).length).toBeGreaterThan(5);
+    await page.click('[data-test="tab-place"]');
+    await page.fill('[data-test="freeze-sheets"]', '');
+    await page.click('[data-test="freeze-button"]');
+    await page.waitForSelector('[data-test="confirm-dialog"]:not([hidden])');
+    expect(await page.locator('[data-test="confirm-text"]').textContent()).toMatch(/^Replace the \d+ LOOM formulas on the sheets .*Outlook \(\d+\).* by their current values\?/);
+    await page.click('[data-test="confirm-yes"]');
+    const done = await outcome('freeze-message');
+    expect(done.kind, done.text).toBe('ok');
+    await pv.settled();
+    expect(await loomLeft()).toEqual([]);
+    expect(await pv.readRange('Outlook!B13:B36')).toEqual(shownBefore);
+    expect(column(shownBefore).every(Number.isFinite)).toBe(true);
+    const report = await page.locator('[data-test="freeze-report"] li').allTextContents();
+    expect(report.some((l) => l.startsWith('Outlook: '))).toBe(true);
+    expect(report.some((l) => l.startsWith('Forecast: '))).toBe(true);
+    await shot('10b-freeze');
   });
 
   it('imports a CSV file into a new sheet, fills Data with its ranges and checks them; a field starting with = stays text', async () => {

@@ -45,7 +45,7 @@ describe('freezeTargets(typed, sheets)', () => {
 describe('freezeSheets(port, ask, sheets)', () => {
   const sheets = () => ({
     History: [['t', 'p'], [1, 40]],
-    Outlook: [['start', 'forecast', 'band', '', 'kept'], ['00:00', '=LOOM.SEQ(3)', '=LOOM.TWO()', null, '=SUM(B2:B4)'], ['01:00'], ['02:00']],
+    Outlook: [['start', 'forecast', 'band', '', 'kept'], ['00:00', '=LOOM.SEQ(3)', '=LOOM.TWO()', null, '=SUM(B2:B4)'], ['01:00'], ['02:00', null, '=B3:C3']],
     Forecast: [['=LOOM.FAIL()', '=ROUND(LOOM.SEQ(1) * 2.5, 0)']],
   });
 
@@ -67,8 +67,11 @@ describe('freezeSheets(port, ask, sheets)', () => {
       { sheet: 'Forecast', formulas: ['A1', 'B1'], cells: 2, errors: ['A1'] },
     ]);
     expect(await loomLeft(port)).toEqual([]);
-    expect(await port.readFormulas('Outlook!B2:E4')).toEqual([[1, 10, 20, '=SUM(B2:B4)'], [2, 11, 21, null], [3, null, null, null]]);
+    expect(await port.readFormulas('Outlook!B2:E4')).toEqual([[1, 10, 20, '=SUM(B2:B4)'], [2, 11, 21, null], [3, '=B3:C3', 11, null]]);
     expect(await port.readRange('Outlook!E2')).toEqual([[6]]);
+    // a kept formula that spills among the frozen cells (C4 into D4) still spills: D4 was left empty, not written
+    expect(port.grid('Outlook')[3].slice(2, 4)).toEqual(['=B3:C3', null]);
+    expect(port.cell('Outlook', 3, 2).result).toEqual({ value: 2, spill: { rows: 1, columns: 2 } });
     // a formula that wraps a LOOM call is a LOOM formula: it is frozen to what it shows
     expect(await port.readFormulas('Forecast!A1:B1')).toEqual([['#VALUE!', 3]]);
   });

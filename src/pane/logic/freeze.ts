@@ -54,35 +54,56 @@ export function freezeTargets(typed: string, sheets: string[]): string[] {
   }))];
 }
 
-/** Reads what freezing `sheets` would write: per sheet, the LOOM cells and the values of the ranges they fill. */
-async function planFreeze(port: WorkbookPort, sheets: string[]): Promise<{ sheet: SheetFreeze; areas: Area[] }[]> {
-  const plan: { sheet: SheetFreeze; areas: Area[] }[] = [];
+/**
+ * Reads what freezing `sheets` would write: per sheet, the LOOM cells and
+ * one block, the smallest rectangle around the ranges they fill. Inside it,
+ * a LOOM range gets its values; every other cell keeps what is written
+ * there, and a cell that another (kept) formula spills into is left empty,
+ * so that formula spills into it again. One write per sheet: the host (and
+ * the preview) recalculates once, not once per formula.
+ */
+async function planFreeze(port: WorkbookPort, sheets: string[]): Promise<{ sheet: SheetFreeze; area: Area }[]> {
+  const plan: { sheet: SheetFreeze; area: Area }[] = [];
   for (const name of sheets) {
     const used = await port.usedAddress(name);
     if (!used) continue;
     const r = parseA1(used);
     const formulas = await port.readFormulas(used);
-    const cells: { address: string; local: string }[] = [];
+    const all: { address: string; local: string; loom: boolean }[] = [];
     formulas.forEach((row, i) => row.forEach((f, j) => {
-      if (!isLoomFormula(f)) return;
+      if (typeof f !== 'string' || !f.startsWith('=')) return;
       const at = { row: r.row + i, column: r.column + j, rows: 1, columns: 1 };
-      cells.push({ address: formatA1({ ...at, sheet: name }), local: formatA1(at) });
+      all.push({ address: formatA1({ ...at, sheet: name }), local: formatA1(at), loom: isLoomFormula(f) });
     }));
-    if (cells.length === 0) continue;
-    const ranges = await port.spillRanges(cells.map((c) => c.address));
-    const areas: Area[] = [];
+    const loom = all.filter((c) => c.loom);
+    if (loom.length === 0) continue;
+    const ranges = (await port.spillRanges(all.map((c) => c.address))).map((a) => parseA1(a));
+    const loomRanges = ranges.filter((_, k) => all[k].loom);
+    const top = Math.min(...loomRanges.map((x) => x.row)), left = Math.min(...loomRanges.map((x) => x.column));
+    const bottom = Math.max(...loomRanges.map((x) => x.row + x.rows)), right = Math.max(...loomRanges.map((x) => x.column + x.columns));
+    const box = { sheet: name, row: top, column: left, rows: bottom - top, columns: right - left };
+    const block: CellValue[][] = Array.from({ length: box.rows }, (_, i) => Array.from({ length: box.columns }, (_, j) => formulas[top - r.row + i]?.[left - r.column + j] ?? null));
+    const put = (x: { row: number; column: number; rows: number; columns: number }, cell: (i: number, j: number) => CellValue) => {
+      for (let i = 0; i < x.rows; i++) for (let j = 0; j < x.columns; j++) {
+        const bi = x.row + i - top, bj = x.column + j - left;
+        if (bi >= 0 && bj >= 0 && bi < box.rows && bj < box.columns) block[bi][bj] = cell(i, j);
+      }
+    };
+    // kept formulas: their spilled cells read as values, but must stay empty for the formula to spill again
+    ranges.forEach((x, k) => { if (!all[k].loom) put(x, (i, j) => (i === 0 && j === 0 ? block[x.row - top]?.[x.column - left] ?? null : null)); });
     const errors: string[] = [];
-    for (let k = 0; k < ranges.length; k++) {
-      const values = await port.readRange(ranges[k]);
+    let cells = 0;
+    for (let k = 0; k < loom.length; k++) {
+      const values = await port.readRange(formatA1({ ...loomRanges[k], sheet: name }));
       const shown = values[0]?.[0];
       if (typeof shown === 'string' && STILL_COMPUTING.has(shown)) {
-        throw new InputError(`${cells[k].address} is still computing (${shown}); wait until every LOOM cell shows its result, then freeze`);
+        throw new InputError(`${loom[k].address} is still computing (${shown}); wait until every LOOM cell shows its result, then freeze`);
       }
-      if (typeof shown === 'string' && ERROR_VALUE.test(shown)) errors.push(cells[k].local);
-      areas.push({ address: ranges[k], values });
+      if (typeof shown === 'string' && ERROR_VALUE.test(shown)) errors.push(loom[k].local);
+      put(loomRanges[k], (i, j) => values[i]?.[j] ?? null);
+      cells += loomRanges[k].rows * loomRanges[k].columns;
     }
-    const written = areas.reduce((n, a) => n + a.values.length * (a.values[0]?.length ?? 0), 0);
-    plan.push({ sheet: { sheet: name, formulas: cells.map((c) => c.local), cells: written, errors }, areas });
+    plan.push({ sheet: { sheet: name, formulas: loom.map((c) => c.local), cells, errors }, area: { address: formatA1(box), values: block } });
   }
   return plan;
 }
@@ -107,8 +128,8 @@ export async function freezeSheets(port: WorkbookPort, ask: AskUser, sheets: str
   const plan = await planFreeze(port, sheets);
   if (plan.length === 0) return [];
   if (!(await ask(freezeQuestion(plan.map((p) => p.sheet))))) return undefined;
-  // the user has answered for every cell named in the question; each range goes through the one write path all the same
-  for (const { areas } of plan) for (const a of areas) await writeWithConsent(port, async () => true, a.address, a.values);
+  // the user has answered for every cell named in the question; each block goes through the one write path all the same
+  for (const { area } of plan) await writeWithConsent(port, async () => true, area.address, area.values);
   return plan.map((p) => p.sheet);
 }
 
