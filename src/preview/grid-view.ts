@@ -182,8 +182,11 @@ export function gridView(port: PreviewWorkbook): GridView {
     for (const chart of port.charts(sheet)) {
       const box = h('figure', { class: 'pv-chart', test: 'sheet-chart', data: { title: chart.title } });
       charts.appendChild(box);
-      void port.readRange(formatA1({ ...parseA1(chart.address), sheet })).then((values) => {
-        if (box.isConnected) chartStops.push(drawSheetChart(box, chart.title, values));
+      const at = parseA1(chart.address);
+      void port.readRange(formatA1({ ...at, sheet })).then((values) => {
+        // categories as the cells show them (a date-time cell by its number format), as the host's chart labels them
+        const labelled = values.map((row, i) => [cellText(row[0], port.format(sheet, at.row + i, at.column)), ...row.slice(1)]);
+        if (box.isConnected) chartStops.push(drawSheetChart(box, chart.title, labelled));
       }).catch(() => box.appendChild(h('figcaption', { text: `${chart.title}: the chart's cells cannot be read` })));
     }
   };

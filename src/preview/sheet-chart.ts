@@ -43,8 +43,8 @@ export function drawSheetChart(container: HTMLElement, title: string, values: Ce
   return () => { plot.destroy(); caption.remove(); };
 }
 
-/** The clock time of an ISO timestamp text (HH:MM), or the text itself. */
+/** The clock time of a timestamp text, ISO or as a date-time cell shows it (HH:MM), or the text itself. */
 function clock(label: string): string {
-  const m = /T(\d{2}:\d{2})/.exec(label);
+  const m = /\d[T ](\d{2}:\d{2})/.exec(label);
   return m ? m[1] : label;
 }

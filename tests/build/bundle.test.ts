@@ -92,10 +92,10 @@ describe('the build (webpack.config.js)', () => {
     const js = readdirSync(out).filter((f) => f.endsWith('.js'));
     for (const f of js) {
       const code = readFileSync(join(out, f), 'utf8');
-      // chevrotain (the preview's formula parser) keeps one unreachable eval( after a `return` in
+      // chevrotain (the preview's formula parser) may keep one unreachable eval( after a `return` in
       // toFastProperties, to keep V8 from optimising that helper; it never runs, and the minifier drops it
       const unreachable = code.includes('function toFastProperties(') ? 1 : 0;
-      expect(code.split('eval(').length - 1, f).toBe(unreachable);
+      expect(code.split('eval(').length - 1, f).toBeLessThanOrEqual(unreachable);
       // characteristic of gpu.js's WebGL backend, which must not be bundled
       expect(code.includes('WebGL2Kernel'), f).toBe(false);
     }
