@@ -114,6 +114,11 @@ export function field(label: string, control: HTMLElement, help?: string, ...ext
   );
 }
 
+/** A count with its noun in the right number: count(1, 'day') is '1 day', count(3, 'day') '3 days'. */
+export function count(n: number, noun: string, plural = `${noun}s`): string {
+  return `${n} ${n === 1 ? noun : plural}`;
+}
+
 /** Formats a number for tables: fixed decimals, "n/a" for unknown. */
 export function fmt(x: number | null | undefined, digits = 2): string {
   return x === null || x === undefined || !Number.isFinite(x) ? 'n/a' : x.toFixed(digits);

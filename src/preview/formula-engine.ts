@@ -160,12 +160,12 @@ function readable(err: unknown, loomNames: string[]): InstanceType<typeof Formul
  */
 async function callLoom(name: string, fn: LoomFunction, args: FunctionArg[], toFailure: ToFailure, toGrid: (r: unknown, n: string) => CellValue[][]): Promise<unknown> {
   const fail = (code: string, message: string) => new FormulaError(code, message);
-  if (args.length > fn.params.length) return fail('#VALUE!', `LOOM.${name} takes at most ${fn.params.length} arguments, got ${args.length}`);
+  if (args.length > fn.params.length) return fail('#VALUE!', `LOOM.${name} takes at most ${fn.params.length} argument${fn.params.length === 1 ? '' : 's'}, got ${args.length}`);
   const values: unknown[] = [];
   for (let i = 0; i < fn.params.length; i++) {
     const arg = args[i];
     if (!arg || arg.omitted) {
-      if (i < fn.required) return fail('#VALUE!', `LOOM.${name} needs at least ${fn.required} arguments; argument ${i + 1} is missing`);
+      if (i < fn.required) return fail('#VALUE!', `LOOM.${name} needs at least ${fn.required} argument${fn.required === 1 ? '' : 's'}; argument ${i + 1} is missing`);
       values.push(null);
       continue;
     }

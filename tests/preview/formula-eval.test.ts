@@ -73,8 +73,8 @@ describe('calculate(source, functions, cache)', () => {
 
   it('argument checks: too many, a missing required one, a range where one cell belongs', async () => {
     const calc = await calculate(source({ S: [['=LOOM.SEQ(1, 2)', '=LOOM.SUM()', '=LOOM.SEQ(A2:A3)'], [1], [2]] }), FAKE);
-    expect(calc.result('S', 0, 0)?.error?.message).toMatch(/takes at most 1 arguments, got 2/);
-    expect(calc.result('S', 0, 1)?.error?.message).toMatch(/needs at least 1 arguments/);
+    expect(calc.result('S', 0, 0)?.error?.message).toMatch(/takes at most 1 argument, got 2/);
+    expect(calc.result('S', 0, 1)?.error?.message).toMatch(/needs at least 1 argument;/);
     expect(calc.result('S', 0, 2)?.error?.message).toMatch(/must be one cell or value, not 2 × 1 cells/);
   });
 

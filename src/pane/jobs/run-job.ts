@@ -81,7 +81,7 @@ export function testSpanStart(frame: DayFrame, days: number): { testStart: strin
   const last = frame.price.length - 1;
   if (last < 0) throw new InputError('there is no day with known prices to test on');
   const first = last - days + 1;
-  if (first < 8) throw new InputError(`a ${days}-day test span leaves ${Math.max(0, first)} days of history before it; pick a shorter span or add history`);
+  if (first < 8) throw new InputError(`a ${days}-day test span leaves ${Math.max(0, first)} ${Math.max(0, first) === 1 ? 'day' : 'days'} of history before it; pick a shorter span or add history`);
   return { testStart: frame.days[first].date, testEnd: frame.days[last].date };
 }
 

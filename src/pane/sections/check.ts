@@ -1,7 +1,7 @@
 import { formatTimestamp, InputError, type BacktestSummary } from '../../engine';
 import { drawBacktestChart } from '../charts/backtest-chart';
 import type { PaneContext } from '../context';
-import { clear, field, fmt, guarded, h, messageLine } from '../dom';
+import { clear, count, field, fmt, guarded, h, messageLine } from '../dom';
 import { readArchive } from '../logic/archive';
 import { gradeArchive, gradeSummary, LATE_MEANING, type ArchiveGrade } from '../logic/grade-archive';
 import { jobProgress } from './job-progress';
@@ -31,7 +31,7 @@ export function checkSection(ctx: PaneContext): HTMLElement {
     const entry = picker.current();
     const span = wholeNumber(days.value, 'the test span', 1);
     const every = retrain.value.trim() === '' ? undefined : wholeNumber(retrain.value, 'retrain every', 0);
-    message.info(`Walking ${entry.name} forward over the last ${span} days…`);
+    message.info(`Walking ${entry.name} forward over the last ${count(span, 'day')}…`);
     const outcome = await progress.run({ type: 'backtest', series: data.series, settings: entry.stored!.settings, label: entry.name, days: span, retrainEvery: every });
     if (outcome.type === 'cancelled') { message.info('Backtest cancelled.'); return; }
     if (outcome.type === 'failed') { message.error(outcome.message); return; }
@@ -93,7 +93,7 @@ function scoreTable(summaries: BacktestSummary[]): HTMLElement {
       h('td', { text: fmt(s.rmae, 3), data: { metric: 'rmae' } }),
       h('td', { text: share(s.coverage), data: { metric: 'coverage' } }),
     ))),
-    h('caption', { text: `${summaries[0]?.days ?? 0} days, ${summaries[0]?.periods ?? 0} periods; rMAE below 1 beats naive-week` }),
+    h('caption', { text: `${count(summaries[0]?.days ?? 0, 'day')}, ${count(summaries[0]?.periods ?? 0, 'period')}; rMAE below 1 beats naive-week` }),
   );
 }
 
