@@ -59,6 +59,6 @@ describe('spotloom backtest', () => {
     expect(fail.stderr).toMatch(/1 periods inside the history have no price, the first at 2025-03-14T03:00:00\+01:00/);
     const fill = runCli(['backtest', '--input', f, '--test-start', '2025-03-31', '--model', 'naive-week']);
     expect(fill.status).toBe(0);
-    expect(fill.stderr).toMatch(/1 periods have no price; model inputs take the same period of the nearest earlier day/);
+    expect(fill.stderr).toMatch(/1 period has no price; model inputs take the same period of the nearest earlier day/);
   });
 });

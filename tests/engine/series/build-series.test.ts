@@ -18,7 +18,7 @@ describe('buildSeries(table, options)', () => {
     expect(series.price).toEqual([1, 2, NaN, NaN, 5, 6]);
     expect(report.gaps).toEqual([{ from: Date.parse('2025-01-01T02:00Z'), periods: 2 }]);
     expect(report.missingPrices).toBe(2);
-    expect(describeIngest(series, report).join('\n')).toMatch(/1 gaps, 2 periods with no row/);
+    expect(describeIngest(series, report).join('\n')).toMatch(/1 gap, 2 periods with no row/);
   });
 
   it('sorts rows that are out of order and says so', () => {
@@ -42,12 +42,12 @@ describe('buildSeries(table, options)', () => {
     ['duplicate timestamps', 'timestamp,price\n2025-01-01T00:00Z,1\n2025-01-01T00:00Z,2\n', /row 3, column "timestamp".*appears twice \(rows 2 and 3\)/],
     ['no header', '2025-01-01T00:00Z,1\n', /header has no "timestamp" column/],
     ['no price column', 'timestamp,cost\n2025-01-01T00:00Z,1\n', /header has no "price" column/],
-    ['a timestamp without offset', 'timestamp,price\n2025-01-01 00:00,1\n2025-01-01 01:00,1\n', /row 2, column "timestamp".*UTC offset/],
+    ['a timestamp that is none', 'timestamp,price\n2025-01-01 00:00,1\n01.01.2025 01:00,1\n', /row 3, column "timestamp": "01.01.2025 01:00" is not a timestamp; write it like 2025-03-30T03:00:00\+02:00 or 2025-03-30T01:00:00Z, or as local time of Europe\/Berlin like 2025-03-30 03:00/],
     ['an impossible date', 'timestamp,price\n2025-02-30T00:00Z,1\n2025-03-01T01:00Z,1\n', /day 30 out of range/],
     ['an empty file', '', /the file is empty/],
     ['a header only', 'timestamp,price\n', /no data rows/],
     ['a text driver column', 'timestamp,price,zone\n2025-01-01T00:00Z,1,north\n2025-01-01T01:00Z,1,north\n', /column "zone": "north" is not a number/],
-    ['a ragged row', 'timestamp,price\n2025-01-01T00:00Z,1,7\n', /row 2: has 3 cells but the header has 2/],
+    ['a ragged row', 'timestamp,price\n2025-01-01T00:00Z,1,7\n', /row 2: has 3 cells but the header has 2 columns/],
     ['a 20-minute step', 'timestamp,price\n2025-01-01T00:00Z,1\n2025-01-01T00:20Z,1\n2025-01-01T00:40Z,1\n', /20 minutes apart/],
     ['an off-grid period', 'timestamp,price\n2025-01-01T00:00Z,1\n2025-01-01T01:00Z,1\n2025-01-01T02:30Z,1\n', /row 4.*grid/],
     ['Infinity', 'timestamp,price\n2025-01-01T00:00Z,Infinity\n2025-01-01T01:00Z,1\n', /"Infinity" is not a number/],
