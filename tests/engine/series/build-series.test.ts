@@ -88,3 +88,40 @@ describe('buildSeries(table, options) with a timestamp years away from the rest 
     expect(series.times).toHaveLength(8761);
   });
 });
+
+describe('buildSeries(table, options) on the dialects desks export', () => {
+  it('reads the numbers of a ;-file with decimal commas as the plain file\'s, bit for bit', () => {
+    const plain = build('timestamp,price,load\n2025-01-01T00:00Z,41.25,6012.5\n2025-01-01T01:00Z,-0.07,5999\n');
+    const comma = build('timestamp;price;load\n2025-01-01T00:00Z;41,25;6.012,5\n2025-01-01T01:00Z;-0,07;5.999\n');
+    expect(comma.series).toEqual(plain.series);
+  });
+
+  it('reads missing markers as unknown, counts them and reports them like empty cells', () => {
+    const { series, report } = build('timestamp,price,wind\n2025-01-01T00:00Z,1,NA\n2025-01-01T01:00Z,#N/A,-\n2025-01-01T02:00Z,3,\n');
+    expect(series.price).toEqual([1, NaN, 3]);
+    expect(series.drivers.wind).toEqual([NaN, NaN, NaN]);
+    expect(report.markedUnknown).toBe(3);
+    expect(report.missingPrices).toBe(1);
+    expect(describeIngest(series, report)).toContain('3 cells held a missing marker such as NA or #N/A and are read as unknown, like empty cells');
+  });
+
+  it('reads local wall-clock timestamps over the 25-hour day of 2025-10-26 (Directive 2000/84/EC) as the file with offsets', () => {
+    const local = build('timestamp,price\n2025-10-26 01:00,1\n2025-10-26 02:00,2\n2025-10-26 02:00,3\n2025-10-26 03:00,4\n');
+    const offsets = build('timestamp,price\n2025-10-26T01:00+02:00,1\n2025-10-26T02:00+02:00,2\n2025-10-26T02:00+01:00,3\n2025-10-26T03:00+01:00,4\n');
+    expect(local.series).toEqual(offsets.series);
+  });
+
+  it('refuses a wall-clock time of the skipped spring hour with row and column', () => {
+    expect(() => build('timestamp,price\n2025-03-30 01:00,1\n2025-03-30 02:00,2\n')).toThrow('f.csv: row 3, column "timestamp": 2025-03-30 02:00 does not exist in Europe/Berlin (the clocks skip it)');
+  });
+
+  it('refuses a repeated autumn wall-clock time when the rows are not in time order (row order would pick the wrong instant)', () => {
+    expect(() => build('timestamp,price\n2025-10-26 03:00,4\n2025-10-26 02:00,3\n2025-10-26 02:00,2\n2025-10-26 01:00,1\n')).toThrow(
+      /^f\.csv: row 3, column "timestamp": is a wall-clock time that the autumn clock change repeats, and the rows are not in time order .*sort the rows or give timestamps with their UTC offset$/,
+    );
+  });
+
+  it('names the separators it reads when the header is one column', () => {
+    expect(() => build('timestamp|price\n2025-01-01T00:00Z|1\n')).toThrow(/it has one column: Spotloom reads files separated by , or ; or tab/);
+  });
+});
