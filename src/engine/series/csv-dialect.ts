@@ -1,7 +1,7 @@
 import Papa from 'papaparse';
 import { InputError } from '../errors';
 import { isMissingMarker } from './missing-markers';
-import type { DecimalMark } from './parse-number';
+import { isCommaNumber, isPlainNumber, type DecimalMark } from './parse-number';
 import { quoteCell } from './quote-cell';
 
 /**
@@ -11,7 +11,8 @@ import { quoteCell } from './quote-cell';
  *
  * Detection, when the user does not say:
  * - the separator is the one that splits the header row into the most
- *   columns (at least two) and every one of the first rows into as many;
+ *   columns (at least two) and every one of the first rows into as many,
+ *   without leaving a quote unbalanced;
  * - the decimal mark is read from the numbers themselves: `41,25`, `0,5`
  *   or `1.234,5` can only be decimal commas, `41.25` or `1,234.5` only
  *   decimal points. A file that shows both is refused; so is one whose only
@@ -69,47 +70,57 @@ export function describeDialect(d: Dialect): string | undefined {
 export function detectDelimiter(text: string): Delimiter {
   let sample = text.length > SAMPLE_CHARS ? text.slice(0, SAMPLE_CHARS) : text;
   if (sample.length < text.length && sample.lastIndexOf('\n') > 0) sample = sample.slice(0, sample.lastIndexOf('\n'));
-  let best: { d: Delimiter; width: number; consistent: boolean } | undefined;
+  let best: { d: Delimiter; score: number[] } | undefined;
   for (const d of CANDIDATES) {
-    const records = Papa.parse<string[]>(sample, { delimiter: d, preview: SAMPLE_ROWS + 1, skipEmptyLines: 'greedy' }).data;
+    const parsed = Papa.parse<string[]>(sample, { delimiter: d, preview: SAMPLE_ROWS + 1, skipEmptyLines: 'greedy' });
+    const records = parsed.data;
     const width = records[0]?.length ?? 0;
     if (width < 2) continue;
-    const consistent = records.every((r) => r.length === width);
-    const better = !best || (consistent && !best.consistent) || (consistent === best.consistent && width > best.width);
-    if (better) best = { d, width, consistent };
+    // a separator that leaves quotes unbalanced (a quoted "x,y" read with the wrong one) is the wrong one
+    const clean = parsed.errors.some((e) => e.type === 'Quotes') ? 0 : 1;
+    const consistent = records.every((r) => r.length === width) ? 1 : 0;
+    const score = [clean, consistent, width];
+    if (!best || ahead(score, best.score)) best = { d, score };
   }
   return best?.d ?? ',';
 }
 
+/** True when score `a` is ahead of `b`, comparing entry by entry (earlier entries matter more); ties keep the earlier candidate. */
+function ahead(a: number[], b: number[]): boolean {
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return a[i] > b[i];
+  return false;
+}
+
 type Evidence = 'comma' | 'point' | 'maybe-point' | 'maybe-comma';
 
-// a cell that could be a number in some dialect: digits, separators, sign, exponent
-const NUMERIC_LOOKING = /^[+-]?[\d.,]*\d[\d.,]*([eE][+-]?\d+)?$/;
-
-/** What one cell says about the decimal mark, if anything. */
+/**
+ * What one cell says about the decimal mark, if anything. Only a cell that
+ * is a number in one of the notations counts (garbage is refused later, at
+ * its row): 12.5 or 0.123 is a decimal point, 12,5 or 1.234,5 a decimal
+ * comma, 1.234.567 can only group thousands (so its mark is the comma), and
+ * 1.234 or 1,234 could be either.
+ */
 function evidenceOf(t: string): Evidence | undefined {
-  if (!NUMERIC_LOOKING.test(t)) return undefined;
-  const comma = t.lastIndexOf(','), point = t.lastIndexOf('.');
-  if (comma < 0 && point < 0) return undefined;
-  if (comma >= 0 && point >= 0) return comma > point ? 'comma' : 'point';
-  if (point >= 0) {
-    // 1.234 may group thousands; 1.234.567 can only group them; 12.5 or 0.123 is a decimal point
-    if (/^[+-]?[1-9]\d{0,2}(\.\d{3})+$/.test(t)) return t.indexOf('.') === point ? 'maybe-point' : 'comma';
-    return 'point';
-  }
-  if (/^[+-]?[1-9]\d{0,2}(,\d{3})+$/.test(t)) return t.indexOf(',') === comma ? 'maybe-comma' : 'point';
-  return 'comma';
+  const comma = t.includes(','), point = t.includes('.');
+  if (!comma && !point) return undefined;
+  if (isPlainNumber(t)) return /^[+-]?[1-9]\d{0,2}\.\d{3}$/.test(t) ? 'maybe-point' : 'point';
+  if (isCommaNumber(t)) return /^[+-]?[1-9]\d{0,2},\d{3}$/.test(t) ? 'maybe-comma' : 'comma';
+  return undefined;
 }
 
 /**
- * The decimal mark of a file's data rows (header excluded), or an
- * InputError naming the cells when the numbers are mixed or ambiguous.
+ * The decimal mark of a file's data rows (header and timestamp column
+ * excluded), or an InputError naming the cells when the numbers are mixed
+ * or ambiguous.
  */
 export function detectDecimal(rows: string[][], rowNumbers: number[], header: string[], source: string): DecimalMark {
   const first: Partial<Record<Evidence, { text: string; row: number; column: string }>> = {};
+  // the timestamp column holds no numbers of the file's dialect (a stray serial there is refused later)
+  const timeColumn = header.findIndex((h) => h.trim().toLowerCase() === 'timestamp');
   for (let i = 0; i < rows.length; i++) {
     const cells = rows[i];
     for (let c = 0; c < cells.length; c++) {
+      if (c === timeColumn) continue;
       const t = cells[c].trim();
       if (isMissingMarker(t)) continue;
       const e = evidenceOf(t);

@@ -38,6 +38,17 @@ export function parseNumber(text: string, where?: Where, decimal: DecimalMark = 
   return value;
 }
 
+/** True when trimmed text `t` is a number in the plain notation (`.` decimal). */
+export function isPlainNumber(t: string): boolean {
+  return NUMBER.test(t);
+}
+
+/** True when trimmed text `t` is a number in the decimal-comma notation (`.` grouping thousands). */
+export function isCommaNumber(t: string): boolean {
+  const plain = commaToPlain(t);
+  return plain !== undefined && NUMBER.test(plain);
+}
+
 function commaToPlain(t: string): string | undefined {
   if (!COMMA_NUMBER.test(t)) return undefined;
   return t.replace(/\./g, '').replace(',', '.');

@@ -20,6 +20,10 @@ describe('detectDelimiter(text)', () => {
     expect(detectDelimiter('timestamp;price;x,y\n2025-01-01T00:00Z;1,5;3\n2025-01-01T01:00Z;2;3\n')).toBe(';');
   });
 
+  it('passes over a separator that leaves a quote unbalanced (a tab file with a quoted "x,y" column and a quoted "5," cell, found by tests/fuzz/csv-ingest)', () => {
+    expect(detectDelimiter('timestamp\tprice\t"x,y"\tload\n2025-03-30T00:15:00+01:00\t\t\t"5,"\t1\n2025-03-30T00:30:00+01:00\t0\t0\t0\n')).toBe('\t');
+  });
+
   it('falls back to , when nothing splits the header', () => {
     expect(detectDelimiter('timestamp|price\n1|2\n')).toBe(',');
     expect(detectDelimiter('')).toBe(',');
@@ -42,6 +46,10 @@ describe('detectDecimal(rows, rowNumbers, header, source)', () => {
   it('lets a clear number settle 1.234 elsewhere in the file', () => {
     expect(detect(rows(['t', '6.012', '1'], ['t', '41,5', '1']))).toBe(',');
     expect(detect(rows(['t', '1.234', '1'], ['t', '41.55', '1']))).toBe('.');
+  });
+
+  it('takes no evidence from a cell that is a number in neither notation (it is refused later, at its own row)', () => {
+    expect(detect(rows(['t', '41.5', '1'], ['t', '1.2.3,4', '1']))).toBe('.');
   });
 
   it('skips timestamps and missing markers', () => {
