@@ -67,8 +67,9 @@ export interface ReadTable {
 /**
  * Turns a table with a `timestamp` column, a target column and numeric
  * driver columns into a regular Series (see series.ts) and a report.
- * Numbers are read in the table's dialect (table.ts); a cell with a missing
- * marker (missing-markers.ts) is unknown; timestamps go through the one
+ * Numbers are read in the table's dialect (table.ts); in a table read from
+ * a file (one with a dialect) a cell with a missing marker
+ * (missing-markers.ts) is unknown; timestamps go through the one
  * timestamp reader (timestamp-reader.ts) in row order.
  *
  * @throws InputError naming the file, row and column for a missing header
@@ -113,10 +114,12 @@ export function readTable(table: Table, options: BuildOptions & { targetOptional
   });
   if (table.rows.length === 0) throw new InputError('the file has a header but no data rows', { file });
 
+  // a data file's dialect includes its missing markers; sheet ranges (no dialect) keep their own rules
   const decimal = table.dialect?.decimal ?? '.';
+  const fromFile = table.dialect !== undefined;
   let markedUnknown = 0;
   const value = (text: string, where: Where) => {
-    if (text.trim() !== '' && isMissingMarker(text)) { markedUnknown++; return NaN; }
+    if (fromFile && text.trim() !== '' && isMissingMarker(text)) { markedUnknown++; return NaN; }
     return parseNumber(text, where, decimal);
   };
   const driverCols = header.map((_, c) => c).filter((c) => c !== timeCol && c !== targetCol);

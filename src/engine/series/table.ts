@@ -7,8 +7,9 @@ import { plural } from './plural';
  * A table as read from a CSV file or a sheet range: a header and rows of
  * cell texts. `rowNumbers[i]` is the 1-based line (or sheet row) of row i,
  * so every message can point the user at the right place. `dialect` says
- * how a file was written (numbers are read with its decimal mark); a table
- * without one is plain (`.` decimals).
+ * how a file was written: numbers are read with its decimal mark and its
+ * missing markers (NA, #N/A, …) as unknown. A table without one (built from
+ * sheet ranges) is plain: `.` decimals, only empty cells unknown.
  */
 export interface Table {
   source: string;

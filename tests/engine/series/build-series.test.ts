@@ -105,6 +105,11 @@ describe('buildSeries(table, options) on the dialects desks export', () => {
     expect(describeIngest(series, report)).toContain('3 cells held a missing marker such as NA or #N/A and are read as unknown, like empty cells');
   });
 
+  it('keeps missing markers for data files: a table built from sheet ranges (no dialect) still refuses "NA"', () => {
+    const table = { source: 'History', header: ['timestamp', 'price'], rows: [['2025-01-01T00:00Z', '1'], ['2025-01-01T01:00Z', 'NA']], rowNumbers: [2, 3] };
+    expect(() => buildSeries(table, { zone: 'Europe/Berlin' })).toThrow('History: row 3, column "price": "NA" is not a number');
+  });
+
   it('reads local wall-clock timestamps over the 25-hour day of 2025-10-26 (Directive 2000/84/EC) as the file with offsets', () => {
     const local = build('timestamp,price\n2025-10-26 01:00,1\n2025-10-26 02:00,2\n2025-10-26 02:00,3\n2025-10-26 03:00,4\n');
     const offsets = build('timestamp,price\n2025-10-26T01:00+02:00,1\n2025-10-26T02:00+02:00,2\n2025-10-26T02:00+01:00,3\n2025-10-26T03:00+01:00,4\n');
