@@ -23,6 +23,9 @@ export async function main(argv: string[]): Promise<number> {
   const zone = () => new Option('--tz <zone>', 'market time zone (IANA)').default('Europe/Berlin');
   const missing = () => new Option('--missing <rule>', 'prices missing inside the history: fill (same period of the nearest earlier day) or fail')
     .choices(['fill', 'fail']).default('fill');
+  // the data file's dialect: detected unless given (engine/series/csv-dialect.ts)
+  const delimiter = () => new Option('--delimiter <sep>', 'cell separator of the data files: , or ; or tab (default: detected)');
+  const decimal = () => new Option('--decimal <mark>', 'decimal mark of the data files: . or , (default: detected; , only with ; or tab)');
   addModelFlags(program.command('backtest')
     .description('walk forward through a test span, forecasting each day from data before it')
     .requiredOption('--input <file>', 'CSV with timestamp, price and driver columns')
@@ -30,7 +33,7 @@ export async function main(argv: string[]): Promise<number> {
     .option('--test-end <date>', 'last delivery day to forecast (YYYY-MM-DD)')
     .addOption(new Option('--model <name>', 'model').choices(MODELS).default('blend'))
     .option('--retrain-every <days>', 'refresh the model every this many days (0 = never; default 1 for linear, 7 for blend and neural)')
-    .addOption(zone()).addOption(missing())
+    .addOption(zone()).addOption(missing()).addOption(delimiter()).addOption(decimal())
     .option('--out <file>', 'write timestamp,forecast,lower,upper,actual')
     .option('--json', 'print one JSON summary on stdout'))
     .action(async (o) => backtestCommand(o));
@@ -41,14 +44,16 @@ export async function main(argv: string[]): Promise<number> {
     .option('--until <date>', 'train on delivery days before this date (YYYY-MM-DD)')
     .requiredOption('--save <file>', 'model file to write (JSON)')
     .addOption(new Option('--model <name>', 'model').choices(['blend', 'neural', 'linear']).default('blend'))
-    .addOption(zone()).addOption(missing())
+    .addOption(zone()).addOption(missing()).addOption(delimiter()).addOption(decimal())
     .option('--json', 'print one JSON summary on stdout'))
     .action(async (o) => trainCommand(o));
 
   program.command('forecast')
     .description('forecast the delivery day(s) after the last known price')
     .requiredOption('--model <file>', 'model file saved by train')
-    .requiredOption('--input <file>', 'CSV: history with prices, then rows with drivers and an empty price')
+    .requiredOption('--input <file>', 'CSV: history with prices (then, without --drivers, the forecast day\'s rows with drivers and an empty price)')
+    .option('--drivers <file>', 'CSV with the forecast day\'s driver rows: timestamp and the history\'s driver columns, no price')
+    .addOption(delimiter()).addOption(decimal())
     .option('--out <file>', 'write timestamp,forecast,lower,upper')
     .option('--json', 'print the forecast as JSON on stdout')
     .action(async (o) => forecastCommand(o));
@@ -56,14 +61,15 @@ export async function main(argv: string[]): Promise<number> {
   program.command('score')
     .description('grade forecast columns against the actual prices')
     .requiredOption('--input <file>', 'CSV with timestamp, actual and forecast columns')
+    .option('--actuals <file>', 'take the actual column from this data file\'s price column, matched on timestamp (for a file that forecast --out wrote)')
     .option('--against <column>', 'reference column for rMAE and the Diebold-Mariano test')
     .option('--season <periods>', 'seasonal lag of the MASE scale in periods (default: one day)')
-    .addOption(zone())
+    .addOption(zone()).addOption(delimiter()).addOption(decimal())
     .option('--json', 'print one JSON object on stdout')
     .action(async (o) => scoreCommand(o));
 
   program.command('demo')
-    .description('write the invented demo market and backtest the baselines on it')
+    .description('write the invented demo market (history, the next day\'s drivers and prices) and backtest the models on it')
     .option('--out <dir>', 'folder for the demo files', 'spotloom-demo')
     .action(async (o) => demoCommand(o));
 

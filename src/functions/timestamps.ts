@@ -1,11 +1,12 @@
 import {
-  dayNumber, InputError, parseTimestamp, serialToWallClock, toWallClock, wallClockToUtc,
-  type WallClock, type Where,
+  InputError, serialToWallClock, timestampReader, type WallClock, type Where,
 } from '../engine';
 import { isBlank } from './cells';
 
 /**
- * Timestamps of delivery periods as cells give them, turned into UTC instants:
+ * Timestamps of delivery periods as cells give them, turned into UTC instants
+ * by the engine's one timestamp reader (timestamp-reader.ts), the same that
+ * reads data files:
  *
  * - a number is a spreadsheet date serial (the workbook's date system; the
  *   1904 system is shifted by 1462 days onto the 1900 one, ECMA-376 Part 1,
@@ -27,32 +28,14 @@ import { isBlank } from './cells';
 export type DateSystem = '1900' | '1904';
 
 const DAYS_1904_TO_1900 = 1462;
-const WITH_OFFSET = /^(\d{4})-(\d{2})-(\d{2})[T ](\d{2}):(\d{2})(?::(\d{2})(?:\.\d+)?)?\s*(Z|[+-]\d{2}(?::?\d{2})?)$/i;
-const LOCAL = /^(\d{4}-\d{2}-\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2}))?)?$/;
 
 export function readTimes(cells: unknown[], zone: string, what: string, dateSystem: DateSystem = '1900', firstRow = 1): (number | undefined)[] {
-  const seen = new Set<string>();
-  const offsets = new Map<string, number | null>();
+  const reader = timestampReader(zone, { zoneOffsetsOnly: true });
   return cells.map((v, i) => {
     const where: Where = { column: what, row: i + firstRow };
     if (isBlank(v)) return undefined;
-    if (typeof v === 'number') return fromWall(serialWall(v, dateSystem, where), zone, seen, offsets, where);
-    if (typeof v === 'string') {
-      const text = v.trim();
-      if (WITH_OFFSET.test(text)) return exactInstant(text, zone, where);
-      const m = LOCAL.exec(text);
-      if (m) {
-        if (m[4] !== undefined && m[4] !== '00') throw new InputError(`"${text}" has seconds; delivery periods start on whole minutes`, where);
-        const minutes = m[2] === undefined ? 0 : Number(m[2]) * 60 + Number(m[3]);
-        if (minutes >= 1440 || Number(m[3] ?? 0) > 59) throw new InputError(`"${text}" is not a time of day`, where);
-        relocating(where, () => dayNumber(m[1]));
-        return fromWall({ date: m[1], minutes }, zone, seen, offsets, where);
-      }
-      throw new InputError(
-        `"${clip(text)}" is not a timestamp; use a date-time cell or text like 2025-03-30T03:00:00+02:00`,
-        where,
-      );
-    }
+    if (typeof v === 'number') return reader.wall(serialWall(v, dateSystem, where), where);
+    if (typeof v === 'string') return reader.text(v, where);
     if (typeof v === 'boolean') throw new InputError(`${v ? 'TRUE' : 'FALSE'} is not a timestamp`, where);
     throw new InputError('holds an error or a value that is not a timestamp', where);
   });
@@ -72,64 +55,6 @@ export function readDate(v: unknown, what: string, dateSystem: DateSystem = '190
 function serialWall(serial: number, dateSystem: DateSystem, where: Where): WallClock {
   try {
     return serialToWallClock(dateSystem === '1904' ? serial + DAYS_1904_TO_1900 : serial);
-  } catch (err) {
-    throw relocate(err, where);
-  }
-}
-
-function fromWall(wall: WallClock, zone: string, seen: Set<string>, offsets: Map<string, number | null>, where: Where): number {
-  // fast path: on a day without a clock change the zone's offset is one number
-  const offset = dayOffset(wall.date, zone, offsets);
-  if (offset !== null) return Date.parse(`${wall.date}T00:00:00Z`) + wall.minutes * 60_000 - offset;
-  try {
-    const early = wallClockToUtc(wall, zone, false);
-    const late = wallClockToUtc(wall, zone, true);
-    if (early === late) return early;
-    const key = `${wall.date} ${wall.minutes}`;
-    const second = seen.has(key);
-    seen.add(key);
-    return second ? late : early;
-  } catch (err) {
-    throw relocate(err, where);
-  }
-}
-
-/**
- * The zone's UTC offset (ms) throughout a local date, or null when it changes
- * on or near that date (then the exact, slower conversion decides). The
- * offset is taken 14 hours before the date's wall-clock midnight and 38
- * hours after it, which brackets the whole local day for any offset.
- */
-function dayOffset(date: string, zone: string, cache: Map<string, number | null>): number | null {
-  let hit = cache.get(date);
-  if (hit === undefined) {
-    const midnight = Date.parse(`${date}T00:00:00Z`);
-    const at = (ms: number) => {
-      const c = toWallClock(ms, zone);
-      return Date.parse(`${c.date}T00:00:00Z`) + c.minutes * 60_000 - Math.floor(ms / 60_000) * 60_000;
-    };
-    const before = at(midnight - 14 * 3_600_000);
-    hit = Number.isFinite(before) && before === at(midnight + 38 * 3_600_000) ? before : null;
-    cache.set(date, hit);
-  }
-  return hit;
-}
-
-function exactInstant(text: string, zone: string, where: Where): number {
-  const ms = parseTimestamp(text, where);
-  const m = WITH_OFFSET.exec(text)!;
-  if (/^(Z|[+-]00(:?00)?)$/i.test(m[7])) return ms; // UTC itself: exact, whatever the zone
-  const local = toWallClock(ms, zone);
-  const written: WallClock = { date: `${m[1]}-${m[2]}-${m[3]}`, minutes: Number(m[4]) * 60 + Number(m[5]) };
-  if (local.date !== written.date || local.minutes !== written.minutes) {
-    throw new InputError(`"${text}" is not a local time of ${zone} (its UTC offset differs); give timestamps of the market's own zone`, where);
-  }
-  return ms;
-}
-
-function relocating<T>(where: Where, f: () => T): T {
-  try {
-    return f();
   } catch (err) {
     throw relocate(err, where);
   }

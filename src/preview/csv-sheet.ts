@@ -1,14 +1,16 @@
-import Papa from 'papaparse';
-import { InputError } from '../engine';
+import { describeDialect, InputError, isMissingMarker, parseCsv, parseNumber, plural } from '../engine';
 import { formatA1, MAX_COLUMNS, MAX_ROWS } from '../host/a1';
 import type { CellValue } from '../host/workbook-port';
 
 /**
- * A CSV file (the design's data file: UTF-8, header row, comma separator,
- * `.` decimal) as a new sheet of the preview workbook, read with papaparse.
+ * A CSV file (the design's data file: UTF-8, header row, `,` `;` or tab
+ * separator, `.` or `,` decimal) as a new sheet of the preview workbook,
+ * read by the engine's one data-file reader (parseCsv), so the preview reads
+ * every file exactly as the command line does.
  *
- * - numeric text becomes a number, an empty field an empty cell, anything
- *   else (timestamps, names) stays text;
+ * - numeric text becomes a number (in the file's decimal mark), an empty
+ *   field or a missing marker (NA, #N/A, …) an empty cell, anything else
+ *   (timestamps, names) stays text;
  * - a field that begins with `=` is kept as text with a leading apostrophe,
  *   so a file can never put a formula into the workbook;
  * - the sheet is named after the file (characters a sheet name may not hold
@@ -17,7 +19,7 @@ import type { CellValue } from '../host/workbook-port';
  *   `timestamp` and `price` columns (else the first two), every other column
  *   a driver.
  *
- * @throws InputError for an empty file, one too large for a sheet, or a line papaparse cannot read
+ * @throws InputError for an empty file, one too large for a sheet, or one the data-file reader refuses (unclosed quote, ragged row, ambiguous decimals)
  * @example csvSheet('timestamp,price\n2025-01-01T00:00Z,41.5\n', 'prices.csv', []).ranges.prices // 'prices!B1:B2'
  */
 export interface CsvSheet {
@@ -30,26 +32,30 @@ export interface CsvSheet {
 
 /** the most cells the preview takes from one file (a browser tab's memory, not the sheet, is the limit) */
 export const MAX_IMPORT_CELLS = 3_000_000;
-const NUMERIC = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
+// text that may be a number in some dialect (parseNumber decides)
+const NUMBER_LOOKING = /^[+-]?[\d.,]*\d[\d.,]*([eE][+-]?\d+)?$/;
 
 export function csvSheet(text: string, fileName: string, taken: string[]): CsvSheet {
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text; // a byte-order mark is not part of the header
   if (body.trim() === '') throw new InputError(`${fileName} is empty; a data file has a header row and one row per delivery period`);
-  const parsed = Papa.parse<string[]>(body, { skipEmptyLines: 'greedy', delimiter: ',' });
-  const bad = parsed.errors.find((e) => e.type !== 'Delimiter');
-  if (bad) throw new InputError(`${fileName} row ${(bad.row ?? 0) + 1}: ${bad.message}; save the file as comma-separated UTF-8 text`);
-  const lines = parsed.data;
-  const width = lines.reduce((w, l) => Math.max(w, l.length), 0);
+  const table = parseCsv(body, fileName);
+  const decimal = table.dialect?.decimal ?? '.';
+  const lines = [table.header, ...table.rows];
+  const width = table.header.length;
   if (lines.length > MAX_ROWS || width > MAX_COLUMNS || lines.length * width > MAX_IMPORT_CELLS) {
     throw new InputError(`${fileName} has ${lines.length} rows and ${width} columns, more than the preview takes (${MAX_IMPORT_CELLS.toLocaleString('en')} cells); cut it to the recent years`);
   }
-  let guarded = 0;
-  const grid = lines.map((line) => Array.from({ length: width }, (_, c): CellValue => {
-    const field = (line[c] ?? '').trim();
+  let guarded = 0, marked = 0;
+  const grid = lines.map((line, r) => line.map((raw): CellValue => {
+    const field = raw.trim();
     if (field === '') return null;
-    if (NUMERIC.test(field)) {
-      const n = Number(field);
-      if (Number.isFinite(n)) return n;
+    if (r > 0 && isMissingMarker(field)) { marked++; return null; }
+    if (NUMBER_LOOKING.test(field)) {
+      try {
+        return parseNumber(field, undefined, decimal);
+      } catch {
+        return field;
+      }
     }
     if (field.startsWith('=')) { guarded++; return `'${field}`; }
     return field;
@@ -69,7 +75,10 @@ export function csvSheet(text: string, fileName: string, taken: string[]): CsvSh
     const last = runs[runs.length - 1];
     if (last && last[1] === c - 1) last[1] = c; else runs.push([c, c]);
   }
-  const notes = [`${n - (titled ? 1 : 0)} data rows, ${width} columns`];
+  const notes = [`${plural(n - (titled ? 1 : 0), 'data row')}, ${plural(width, 'column')}`];
+  const dialect = table.dialect && describeDialect(table.dialect);
+  if (dialect) notes.push(dialect);
+  if (marked) notes.push(`${plural(marked, 'cell')} with a missing marker (NA, #N/A, -, …) left empty`);
   if (width < 2) notes.push('a data file needs at least a timestamp and a price column');
   if (!titled) notes.push('no header row found: the first column is taken as timestamps, the second as prices');
   if (guarded) notes.push(`${guarded} field${guarded === 1 ? '' : 's'} beginning with = kept as text (shown with a leading ')`);

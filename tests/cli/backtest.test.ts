@@ -56,9 +56,9 @@ describe('spotloom backtest', () => {
     const f = writeFile(dir, 'gappy.csv', lines.join('\n'));
     const fail = runCli(['backtest', '--input', f, '--test-start', '2025-03-31', '--model', 'naive-week', '--missing', 'fail']);
     expect(fail.status).toBe(2);
-    expect(fail.stderr).toMatch(/1 periods inside the history have no price, the first at 2025-03-14T03:00:00\+01:00/);
+    expect(fail.stderr).toMatch(/1 period inside the history has no price, the first at 2025-03-14T03:00:00\+01:00/);
     const fill = runCli(['backtest', '--input', f, '--test-start', '2025-03-31', '--model', 'naive-week']);
     expect(fill.status).toBe(0);
-    expect(fill.stderr).toMatch(/1 periods have no price; model inputs take the same period of the nearest earlier day/);
+    expect(fill.stderr).toMatch(/1 period has no price; model inputs take the same period of the nearest earlier day/);
   });
 });

@@ -40,6 +40,14 @@ beforeAll(() => {
   model.fit(inputFrame({ ...series, times: series.times.slice(0, -24), price: series.price.slice(0, -24), drivers: { load_forecast: series.drivers.load_forecast.slice(0, -24) } }));
   file.model = join(dir, 'model.json');
   writeFileSync(file.model, storedModelText(toStoredModel(model, { name: 'fuzz', zone: series.zone, resolution: 60 })));
+  // the daily files: history without the forecast day, that day's drivers (;, decimal commas), an issued forecast and prices
+  file.history = join(dir, 'history.csv');
+  writeFileSync(file.history, rows(series.times.length - 24));
+  const last = series.times.slice(-24);
+  file.drivers = join(dir, 'drivers.csv');
+  writeFileSync(file.drivers, ['timestamp;load_forecast', ...last.map((t, i) => `${new Date(t).toISOString()};${String(series.drivers.load_forecast[series.times.length - 24 + i]).replace('.', ',')}`)].join('\n'));
+  file.issued = join(dir, 'issued.csv');
+  writeFileSync(file.issued, ['timestamp,forecast,lower,upper', ...series.times.slice(0, 48).map((t, i) => `${new Date(t).toISOString()},${series.price[i] + 1},${series.price[i] - 5},${series.price[i] + 5}`)].join('\n'));
   file.junk = join(dir, 'junk.csv');
   writeFileSync(file.junk, '\u0000\u0001garbage,"\n');
   file.folder = join(dir, 'folder');
@@ -52,11 +60,12 @@ const FLAGS = [
   '--input', '--test-start', '--test-end', '--model', '--retrain-every', '--tz', '--region', '--seed', '--out', '--json',
   '--until', '--save', '--against', '--season', '--hidden', '--learning-rate', '--momentum', '--iterations', '--ensemble',
   '--features', '--coverage', '--help', '--version', '-h', '--bogus', '-x', '--', '---', '--input=',
+  '--drivers', '--actuals', '--delimiter', '--decimal',
 ];
 
 /** A value token; files are named by key and resolved in the scratch folder. */
 const value = fc.oneof(
-  fc.constantFrom('@short', '@long', '@score', '@model', '@junk', '@folder', '@missing', '@out', '@save'),
+  fc.constantFrom('@short', '@long', '@score', '@model', '@junk', '@folder', '@missing', '@out', '@save', '@history', '@drivers', '@issued'),
   fc.constantFrom('2025-01-20', '2025-03-30', '2025-05-01', '2025-01-05', '1999-01-01', '2099-12-31', '2025-02-30', '2025-1-1', 'tomorrow'),
   fc.constantFrom('0', '1', '-1', '1.5', '7', '1e999', 'NaN', '', ' ', '99999999999', '0.9', '1,2', '5,abc', '0x10', '-0'),
   fc.constantFrom('blend', 'neural', 'linear', 'naive-day', 'naive-week', 'weekday-rule', 'oracle', 'Europe/Berlin', 'UTC', 'Mars/Base', 'DE', 'DE-BY', 'ZZ', 'price_lags,weekday', 'ours', 'theirs', 'actual'),
@@ -66,7 +75,7 @@ const value = fc.oneof(
 
 /** Mostly well-formed values per flag, so that runs get past the option checks into the engine. */
 const GOOD: Record<string, string[]> = {
-  '--input': ['@short', '@long', '@long', '@score', '@junk', '@missing', '@folder'],
+  '--input': ['@short', '@long', '@long', '@score', '@junk', '@missing', '@folder', '@history', '@issued'],
   '--test-start': ['2025-04-10', '2025-04-28', '2025-01-12', '2025-01-06', '2025-05-03', '2024-12-01', '2025-06-01'],
   '--test-end': ['2025-04-20', '2025-05-02', '2025-01-01'],
   '--until': ['2025-04-20', '2025-03-01', '2025-01-06', '2030-01-01'],
@@ -81,13 +90,17 @@ const GOOD: Record<string, string[]> = {
   '--hidden': ['4', '3,2'], '--learning-rate': ['0.05', '0.3'], '--momentum': ['0', '0.5'],
   '--iterations': ['2', '3'], '--ensemble': ['1', '2'], '--features': ['price_lags,weekday', 'price_lags', 'drivers_target,price_lags'],
   '--coverage': ['0.8', '0.9'],
+  '--drivers': ['@drivers', '@drivers', '@short', '@junk', '@missing'],
+  '--actuals': ['@short', '@long', '@history', '@junk'],
+  '--delimiter': [',', ';', 'tab', '|'],
+  '--decimal': ['.', ',', ',', 'x'],
 };
 const MODEL_FLAGS = ['--region', '--seed', '--hidden', '--learning-rate', '--momentum', '--iterations', '--ensemble', '--features', '--coverage'];
 const OWN: Record<string, string[]> = {
   backtest: ['--test-end', '--retrain-every', '--tz', '--out', '--json', ...MODEL_FLAGS],
   train: ['--until', '--tz', '--json', ...MODEL_FLAGS],
-  forecast: ['--out', '--json'],
-  score: ['--season', '--tz', '--json'],
+  forecast: ['--out', '--json', '--drivers', '--drivers', '--delimiter', '--decimal'],
+  score: ['--season', '--tz', '--json', '--actuals', '--delimiter', '--decimal'],
 };
 const REQUIRED: Record<string, string[]> = {
   backtest: ['--input', '--test-start', '--model'], train: ['--input', '--save', '--model'],
@@ -107,7 +120,7 @@ const argv = fc.record({
     if (keep[i] < 8) return; // a required flag left out
     const good = command === 'forecast' && flag === '--model' ? ['@model', '@model', '@junk', '@short']
       : command === 'train' && flag === '--model' ? ['linear', 'linear', 'blend', 'neural', 'naive-day']
-        : command === 'score' && flag === '--input' ? ['@score', '@score', '@short'] : GOOD[flag];
+        : command === 'score' && flag === '--input' ? ['@score', '@score', '@short', '@issued'] : GOOD[flag];
     args.push(flag, keep[i] < 20 ? wild[i] : good[picks[i] % good.length]);
   });
   for (const [which, v, kind, pick] of extra) {

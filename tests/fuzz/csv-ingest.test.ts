@@ -1,12 +1,13 @@
 import fc from 'fast-check';
 import { DateTime } from 'luxon';
 import { describe, expect, it } from 'vitest';
-import { buildSeries, deliveryDays, InputError, MAX_PERIODS, parseCsv, type Series } from '../../src/engine';
+import { buildSeries, deliveryDays, InputError, MAX_PERIODS, MISSING_MARKERS, parseCsv, toWallClock, wallClockToUtc, type Series } from '../../src/engine';
 import { outcome, params, ZONES } from './support';
 
 /**
  * parseCsv + buildSeries on generated files. Each file is planned first
- * (instants, values, order, spelling), so the test knows the right answer:
+ * (instants, values, order, spelling, dialect: separator, decimal comma,
+ * missing markers, local wall-clock timestamps), so the test knows the right answer:
  * the series the plan describes, or an InputError at the row of the one
  * broken cell, or the documented refusal (duplicate instant, fewer than 2
  * periods, a step that is not 15, 30 or 60 minutes).
@@ -26,13 +27,15 @@ const numberCell = fc.oneof(
   { weight: 2, arbitrary: fc.constant('') },
 );
 
+// not a number in any dialect ('1,5' is one with the decimal comma, NA and NaN are missing markers)
 const garbageNumber = fc.oneof(
-  fc.constantFrom('NaN', 'Infinity', '-Infinity', 'inf', '1,5', '12 34', 'abc', 'n/a', '#N/A', '1e999', '١٢', '0x1A', '—', '"', "'3"),
+  fc.constantFrom('Infinity', '-Infinity', 'inf', '12 34', 'abc', '1e999', '١٢', '0x1A', '—', '"', "'3", '1.2.3,4', 'N/A/'),
   fc.string({ unit: 'grapheme', minLength: 1, maxLength: 12 }).filter((t) => t.trim() !== '' && !/^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/.test(t.trim())),
 );
 
+// never a timestamp (wall-clock text without offset is one now: see the 'wall' style)
 const garbageStamp = fc.constantFrom(
-  '2025-03-30T02:30:00', '2025-10-26 02:30', '2025-03-30', '45658.5', 'yesterday', '', '2025-13-01T00:00Z',
+  '45658.5', 'yesterday', '', '2025-13-01T00:00Z', '2025-13-01 00:00', '2025-02-29 10:00', '2025-01-01 10:00:30',
   '2025-02-29T00:00Z', '2025-01-01T24:00Z', '2025-01-01T00:00+25:00', '30/03/2025 02:00', '2025-03-30T02:00:00 CET',
 );
 
@@ -48,7 +51,9 @@ const plan = fc.record({
   drivers: fc.uniqueArray(fc.constantFrom(...DRIVER_NAMES), { maxLength: 3 }),
   cells: fc.array(fc.tuple(numberCell, numberCell, numberCell, numberCell), { minLength: 220, maxLength: 220 }),
   drop: fc.array(fc.boolean(), { minLength: 220, maxLength: 220 }).map((a) => a.map((b, i) => b && i % 5 === 0)),
-  stampStyle: fc.array(fc.constantFrom('local', 'Z', 'utc-offset', 'odd-offset', 'compact', 'space', 'millis', 'lower'), { minLength: 220, maxLength: 220 }),
+  stampStyle: fc.array(fc.constantFrom('local', 'Z', 'utc-offset', 'odd-offset', 'compact', 'space', 'millis', 'lower', 'wall', 'wall'), { minLength: 220, maxLength: 220 }),
+  dialect: fc.constantFrom('plain', 'plain', 'semicolon', 'semicolon-comma', 'tab', 'tab-comma'),
+  markers: fc.boolean(),
   order: fc.constantFrom('sorted', 'sorted', 'reversed', 'shuffled', 'swap'),
   shuffleKeys: fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 230, maxLength: 230 }),
   duplicates: fc.array(fc.nat(), { maxLength: 2 }),
@@ -65,7 +70,7 @@ const plan = fc.record({
 });
 type Plan = typeof plan extends fc.Arbitrary<infer T> ? T : never;
 
-interface Row { time: number; cells: string[]; line: number; bad: boolean }
+interface Row { time: number; cells: string[]; line: number; bad: boolean; badCell?: number }
 
 function stampText(t: number, zone: string, style: string): string {
   const local = DateTime.fromMillis(t, { zone });
@@ -77,13 +82,21 @@ function stampText(t: number, zone: string, style: string): string {
     case 'compact': return local.toFormat("yyyy-MM-dd'T'HH:mmZZZ");
     case 'space': return local.toFormat('yyyy-MM-dd HH:mm:ssZZ');
     case 'millis': return local.toISO()!;
+    case 'wall': {
+      // local wall-clock text, unless the autumn change repeats this wall time (the order rule is tested on its own)
+      const wall = toWallClock(t, zone);
+      if (wallClockToUtc(wall, zone, false) !== wallClockToUtc(wall, zone, true)) return local.toISO({ suppressMilliseconds: true })!;
+      return local.toFormat(t % 7_200_000 === 0 ? 'yyyy-MM-dd HH:mm' : "yyyy-MM-dd'T'HH:mm");
+    }
     default: return new Date(t).toISOString().toLowerCase();
   }
 }
 
 function quote(cell: string, always: boolean): string {
-  return always || /[",\r\n]/.test(cell) ? `"${cell.replace(/"/g, '""')}"` : cell;
+  return always || /[",;\t\r\n]/.test(cell) ? `"${cell.replace(/"/g, '""')}"` : cell;
 }
+
+const PLAIN_NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
 
 /** The file text and what the engine should make of it. */
 function render(p: Plan) {
@@ -121,28 +134,39 @@ function render(p: Plan) {
     if (p.garbage.kind === 'stamp') r.cells[timeCol] = p.garbage.stamp;
     else if (p.garbage.kind === 'number') {
       const numberCols = r.cells.map((_, c) => c).filter((c) => c !== timeCol);
-      r.cells[numberCols[p.garbage.column % numberCols.length]] = p.garbage.number;
+      r.badCell = numberCols[p.garbage.column % numberCols.length];
+      r.cells[r.badCell] = p.garbage.number;
     } else r.cells.push('1');
-    // a row left with only empty cells is a blank line, which is skipped (table.ts)
-    if (r.cells.every((c) => c.trim() === '')) { rows.splice(p.garbage.at % rows.length, 1); garbageKind = undefined; }
+    // a row left with only empty cells is a blank line, which is skipped (table.ts); with markers its cells are not empty
+    if (!p.markers && r.cells.every((c) => c.trim() === '')) { rows.splice(p.garbage.at % rows.length, 1); garbageKind = undefined; }
   }
 
   const eol = p.crlf ? '\r\n' : '\n';
-  const lines = [names.map((n) => quote(n, p.quoteAll)).join(',')];
+  const sep = p.dialect.startsWith('semicolon') ? ';' : p.dialect.startsWith('tab') ? '\t' : ',';
+  const comma = p.dialect.endsWith('-comma');
+  const timeCol = priceFirst ? 1 : 0;
+  let marked = 0;
+  // a cell as the dialect writes it: decimal commas, a missing marker for an empty value
+  const written = (cell: string, c: number, garbage: boolean) => {
+    if (c === timeCol) return cell;
+    if (cell.trim() === '' && p.markers) return MISSING_MARKERS[marked++ % MISSING_MARKERS.length];
+    return comma && !garbage && PLAIN_NUMBER.test(cell.trim()) ? cell.replace('.', ',') : cell;
+  };
+  const lines = [names.map((n) => quote(n, p.quoteAll)).join(sep)];
   const placed: Row[] = [];
   // row numbers are file lines: line breaks inside quoted cells count too
   const breaks = (t: string) => t.split('\n').length - 1;
   let line = 1 + breaks(lines[0]);
   rows.forEach((r, i) => {
     if (p.blank.includes(i)) { lines.push(p.spaces ? ' ' : ''); line++; }
-    const cells = r.cells.map((c) => quote(p.spaces ? ` ${c} ` : c, p.quoteAll));
-    lines.push(cells.join(','));
+    const cells = r.cells.map((c, j) => written(c, j, j === r.badCell)).map((c) => quote(p.spaces ? ` ${c} ` : c, p.quoteAll));
+    lines.push(cells.join(sep));
     line++;
     placed.push({ ...r, line });
     line += breaks(lines[lines.length - 1]);
   });
   const text = (p.bom ? '\uFEFF' : '') + lines.join(eol) + (p.trailingNewline ? eol : '');
-  return { text, rows: placed, names, garbageKind, priceFirst };
+  return { text, rows: placed, names, garbageKind, priceFirst, marked };
 }
 
 function mode(sorted: number[]): number {
@@ -178,7 +202,7 @@ function expectSeries(series: Series, rows: Row[], names: string[], priceFirst: 
 describe('parseCsv + buildSeries on generated files', () => {
   it('give the planned series, or an InputError at the row of the broken cell', () => {
     fc.assert(fc.property(plan, (p) => {
-      const { text, rows, names, garbageKind, priceFirst } = render(p);
+      const { text, rows, names, garbageKind, priceFirst, marked } = render(p);
       const r = outcome(() => buildSeries(parseCsv(text, 'fuzz.csv'), { zone: p.zone }));
       const step = p.resolution * 60_000;
       const lowerNames = names.map((n) => n.trim().toLowerCase());
@@ -214,6 +238,7 @@ describe('parseCsv + buildSeries on generated files', () => {
       expect(series.zone).toBe(p.zone);
       const seen = expectSeries(series, rows, names, priceFirst, m);
       expect(report.rows).toBe(rows.length);
+      expect(report.markedUnknown).toBe(marked);
       expect(report.periods).toBe(series.times.length);
       expect(report.gaps.reduce((n, g) => n + g.periods, 0)).toBe(series.times.length - seen.size);
       let outOfOrder = 0;

@@ -11,7 +11,7 @@ describe('csvSheet(text, fileName, taken)', () => {
       ['2026-11-30T00:00:00+01:00', null, 5990],
     ]);
     expect(sheet.ranges).toEqual({ times: 'prices!A1:A3', prices: 'prices!B1:B3', drivers: ['prices!C1:C3'] });
-    expect(sheet.notes[0]).toBe('2 data rows, 3 columns');
+    expect(sheet.notes).toEqual(['2 data rows, 3 columns']);
   });
 
   it('finds timestamp and price by name and groups the other columns into ranges of neighbours', () => {
@@ -34,7 +34,24 @@ describe('csvSheet(text, fileName, taken)', () => {
 
   it('refuses an empty file and a line it cannot read, naming the file', () => {
     expect(() => csvSheet(' \n', 'empty.csv', [])).toThrow(/^empty.csv is empty/);
-    expect(() => csvSheet('timestamp,price\n"2026-01-01,1\n', 'bad.csv', [])).toThrow(/^bad.csv row \d+: .*save the file as comma-separated UTF-8 text$/);
+    expect(() => csvSheet('timestamp,price\n"2026-01-01,1\n', 'bad.csv', [])).toThrow('bad.csv: row 2: a quoted cell is not closed: a " opens it and no " ends it');
+    expect(() => csvSheet('timestamp,price\n2026-01-01T00:00Z,1,2\n', 'ragged.csv', [])).toThrow(/^ragged\.csv: row 2: has 3 cells but the header has 2 columns/);
+  });
+
+  it('reads a file in the dialects desks export with the command line\'s reader: ;, decimal commas, thousands, missing markers', () => {
+    const sheet = csvSheet('\ufefftimestamp;price;load_forecast\r\n2026-11-29 23:00;41,5;6.010\r\n2026-11-30 00:00;NA;5.990,5\r\n2026-11-30 01:00;-3,25;#N/A\r\n', 'export.csv', []);
+    expect(sheet.grid).toEqual([
+      ['timestamp', 'price', 'load_forecast'],
+      ['2026-11-29 23:00', 41.5, 6010],
+      ['2026-11-30 00:00', null, 5990.5],
+      ['2026-11-30 01:00', -3.25, null],
+    ]);
+    expect(sheet.notes).toEqual(['3 data rows, 3 columns', "read as ';'-separated with decimal commas", '2 cells with a missing marker (NA, #N/A, -, …) left empty']);
+    expect(csvSheet('timestamp\tprice\n2026-01-01T00:00Z\t12.5\n', 'tab.tsv', []).grid[1]).toEqual(['2026-01-01T00:00Z', 12.5]);
+  });
+
+  it('refuses numbers it cannot read one way only, as the command line does', () => {
+    expect(() => csvSheet('timestamp;price\n2026-01-01 00:00;1.234\n', 'amb.csv', [])).toThrow(/amb\.csv: row 2, column "price": "1\.234" could be 1\.234 with a decimal point or 1234/);
   });
 });
 

@@ -1,10 +1,10 @@
 import { createModel, formatTimestamp, inputFrame, runBacktest } from '../../engine';
-import { intOption, loadSeries } from '../load-input';
+import { dialectChoice, intOption, loadSeries, type DialectFlags } from '../load-input';
 import { modelOptions, type ModelFlags } from '../model-flags';
 import { stderrProgress } from '../progress';
 import { writeCsv } from '../write-csv';
 
-export interface BacktestFlags extends ModelFlags {
+export interface BacktestFlags extends ModelFlags, DialectFlags {
   input: string;
   testStart: string;
   testEnd?: string;
@@ -19,7 +19,7 @@ export interface BacktestFlags extends ModelFlags {
 export async function backtestCommand(flags: BacktestFlags): Promise<void> {
   const model = createModel(flags.model, modelOptions(flags));
   const retrainEvery = intOption(flags.retrainEvery, '--retrain-every', 0, model.defaultRetrainEvery ?? 0);
-  const { series } = loadSeries(flags.input, flags.tz, 'price', flags.missing);
+  const { series } = loadSeries(flags.input, flags.tz, 'price', flags.missing, dialectChoice(flags));
   const frame = inputFrame(series);
   const { rows, summary } = runBacktest(model, frame, series, {
     testStart: flags.testStart, testEnd: flags.testEnd, retrainEvery, progress: stderrProgress('backtest'),

@@ -3,11 +3,11 @@ import { basename } from 'node:path';
 import {
   createModel, dayIndexOf, frameBefore, InputError, inputFrame, Learner, NAME_RULE, StoredName, storedModelText, toStoredModel,
 } from '../../engine';
-import { loadSeries } from '../load-input';
+import { dialectChoice, loadSeries, type DialectFlags } from '../load-input';
 import { modelOptions, type ModelFlags } from '../model-flags';
 import { stderrProgress } from '../progress';
 
-export interface TrainFlags extends ModelFlags {
+export interface TrainFlags extends ModelFlags, DialectFlags {
   input: string;
   until?: string;
   save: string;
@@ -20,7 +20,7 @@ export interface TrainFlags extends ModelFlags {
 export async function trainCommand(flags: TrainFlags): Promise<void> {
   const model = createModel(flags.model, modelOptions(flags));
   if (!(model instanceof Learner)) throw new InputError(`--model ${flags.model} has nothing to train`);
-  const { series } = loadSeries(flags.input, flags.tz, 'price', flags.missing);
+  const { series } = loadSeries(flags.input, flags.tz, 'price', flags.missing, dialectChoice(flags));
   // the model file keeps driver names: refuse one it cannot keep now, not after training
   for (const name of Object.keys(series.drivers)) {
     if (!StoredName.safeParse(name).success) {

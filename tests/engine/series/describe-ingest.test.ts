@@ -32,7 +32,7 @@ describe('describeIngest(series, report)', () => {
     const t0 = Date.parse('2024-12-31T23:00:00Z'), n = 4 * 8766;
     const times = Array.from({ length: n }, (_, k) => t0 + k * 3_600_000);
     const series: Series = { times, price: times.map(() => 1), drivers: {}, resolution: 60, zone: 'Europe/Berlin' };
-    const report: IngestReport = { rows: n, periods: n, gaps: [], outOfOrderRows: 0, missingPrices: 0 };
+    const report: IngestReport = { rows: n, periods: n, gaps: [], outOfOrderRows: 0, missingPrices: 0, markedUnknown: 0 };
     expect(describeIngest(series, report)[1]).toBe(
       'daylight-saving days: 2025-03-30 (23), 2025-10-26 (25), 2026-03-29 (23), 2026-10-25 (25), 2027-03-28 (23), 2027-10-31 (25) and 2 more');
   });
@@ -43,8 +43,8 @@ describe('describeIngest(series, report)', () => {
     [rows[1], rows[2]] = [rows[2], rows[1]];
     const { series, report } = build(rows);
     expect(describeIngest(series, report).slice(1)).toEqual([
-      '1 rows were out of time order and have been sorted',
-      '1 gaps, 2 periods with no row (first at 2025-01-06T09:00:00+01:00); their values count as unknown',
+      '1 row was out of time order and has been sorted',
+      '1 gap, 2 periods with no row (first at 2025-01-06T09:00:00+01:00); their values count as unknown',
       '3 periods have no price; model inputs take the same period of the nearest earlier day, scores skip them',
     ]);
   });

@@ -5,6 +5,7 @@ describe('parseCsv(text, source)', () => {
   it('reads a header and rows of cell texts', () => {
     expect(parseCsv('timestamp,price\n2025-01-01T00:00Z,41.2\n', 'a.csv')).toEqual({
       source: 'a.csv', header: ['timestamp', 'price'], rows: [['2025-01-01T00:00Z', '41.2']], rowNumbers: [2],
+      dialect: { delimiter: ',', decimal: '.' },
     });
   });
 
@@ -22,7 +23,7 @@ describe('parseCsv(text, source)', () => {
   // a quoted cell with a line break spans two lines: later rows keep their file line numbers
   it('numbers rows by their line after a quoted line break', () => {
     expect(parseCsv('a,b\n"x\ny",1\n3,4\n', 'q.csv').rowNumbers).toEqual([2, 4]);
-    expect(() => parseCsv('a,b\n"x\ny",1\n3\n', 'q.csv')).toThrow('q.csv: row 4: has 1 cells but the header has 2');
+    expect(() => parseCsv('a,b\n"x\ny",1\n3\n', 'q.csv')).toThrow('q.csv: row 4: has 1 cell but the header has 2 columns');
   });
 
   it('skips blank lines but keeps their place in the row numbering', () => {
@@ -51,12 +52,13 @@ describe('parseCsv(text, source)', () => {
     }
   });
 
-  it('refuses a row with the wrong number of cells, naming its line', () => {
-    expect(() => parseCsv('a,b\n1,2\n\n3\n', 'r.csv')).toThrow('r.csv: row 4: has 1 cells but the header has 2');
-    expect(() => parseCsv('a,b\n1,2,3\n', 'r.csv')).toThrow('r.csv: row 2: has 3 cells but the header has 2');
+  it('refuses a row with the wrong number of cells, naming its line and the separator it was read with', () => {
+    expect(() => parseCsv('a,b\n1,2\n\n3\n', 'r.csv')).toThrow("r.csv: row 4: has 1 cell but the header has 2 columns (the file reads as ','-separated); check this row for a stray ',' or an unclosed quote");
+    expect(() => parseCsv('a,b\n1,2,3\n', 'r.csv')).toThrow('r.csv: row 2: has 3 cells but the header has 2 columns');
+    expect(() => parseCsv('a;b\n1;2;3\n1;2\n', 'r.csv')).toThrow("r.csv: row 2: has 3 cells but the header has 2 columns (the file reads as ';'-separated)");
   });
 
-  it('uses the comma only: a semicolon file is one column', () => {
-    expect(parseCsv('a;b\n1;2\n', 's.csv')).toMatchObject({ header: ['a;b'], rows: [['1;2']] });
+  it('refuses a quoted cell that is never closed, naming its line', () => {
+    expect(() => parseCsv('timestamp,price\n2025-01-01T00:00Z,1\n"2025-01-01T01:00Z,2\n', 'u.csv')).toThrow('u.csv: row 3: a quoted cell is not closed');
   });
 });
