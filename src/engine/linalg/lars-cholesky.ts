@@ -52,6 +52,15 @@ export class ActiveCholesky {
     return true;
   }
 
+  /** True when a column (as for `add`) lies in the span of the active ones; the factor is not changed. */
+  spans(gjj: number, gaj: ArrayLike<number>, tol: number): boolean {
+    if (!this.add(gjj, gaj, tol)) return true;
+    this.size--;
+    const row = this.size * this.capacity;
+    for (let i = 0; i <= this.size; i++) this.l[row + i] = 0;
+    return false;
+  }
+
   /** Removes the column at position `i` (0-based, in order of entry). */
   remove(i: number): void {
     const k = this.size, m = this.capacity, l = this.l;

@@ -29,8 +29,8 @@ import { ActiveCholesky } from './lars-cholesky';
  * @param gram  XᵀX, p × p row-major (both triangles)
  * @param xty   Xᵀy, length p
  * @param rows  n, the number of rows of X
- * @example larsLassoPath(Float64Array.of(1, 0, 0, 1), Float64Array.of(3, 1), 2, 1)
- *   // alphas [3, 1, 0]; coefs [[0,0], [2,0], [3,1]]
+ * @example larsLassoPath(Float64Array.of(1, 0, 0, 1), Float64Array.of(3, 1), 2, 2)
+ *   // alphas [1.5, 0.5, 0]; coefs [[0,0], [2,0], [3,1]]
  */
 export interface LassoPath {
   /** α at each knot, decreasing */
@@ -118,7 +118,8 @@ export function larsLassoPath(
     const ro = out * p;
     for (let t = 0; t < k; t++) ci -= gram[ro + active[t]] * beta[active[t]];
     c[out] = ci;
-    dead.fill(0); // the active span shrank: a column in it may now join
+    // the active span shrank: a column that lay in it may now join
+    for (let i = 0; i < p; i++) if (dead[i] && !chol.spans(gram[i * p + i], gA.subarray(i * cap, i * cap + k), tol)) dead[i] = 0;
   };
 
   let dropped = false;
@@ -153,9 +154,7 @@ export function larsLassoPath(
     let gamma = C / A;
     for (let i = 0; i < p; i++) {
       if (isActive[i]) continue;
-      let ai = 0;
-      const ri = i * cap;
-      for (let q = 0; q < k; q++) ai += gA[ri + q] * w[q];
+      const ai = dotPrefix(gA, i * cap, w, k);
       a[i] = ai;
       if (dead[i]) continue;
       const g1 = (C - c[i]) / (A - ai + TINY32);
@@ -182,4 +181,18 @@ export function larsLassoPath(
     alphas: Float64Array.from(alphas), coefs, residualCorrelation: Float64Array.from(residualCorrelation),
     active: Array.from(active.subarray(0, k)), steps,
   };
+}
+
+/** Σ_{q<k} x[from + q] · w[q], four terms at a time (the hot loop of a LARS step). */
+function dotPrefix(x: Float64Array, from: number, w: Float64Array, k: number): number {
+  let s0 = 0, s1 = 0, s2 = 0, s3 = 0;
+  let q = 0;
+  for (; q + 3 < k; q += 4) {
+    s0 += x[from + q] * w[q];
+    s1 += x[from + q + 1] * w[q + 1];
+    s2 += x[from + q + 2] * w[q + 2];
+    s3 += x[from + q + 3] * w[q + 3];
+  }
+  for (; q < k; q++) s0 += x[from + q] * w[q];
+  return (s0 + s1) + (s2 + s3);
 }
