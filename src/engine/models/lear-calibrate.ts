@@ -29,8 +29,10 @@ import type { DayForecast, Progress } from './model';
  * As scikit-learn 1.2 (Debian's, the reference of the tests): no column
  * normalisation inside the criterion and the noise variance from least
  * squares on all inputs (lars-noise-variance.ts). The published results
- * were computed with an older scikit-learn whose `LassoLarsIC` normalised
- * the columns and used the target's variance as noise variance.
+ * predate scikit-learn 1.1 and 1.2; until then `LassoLarsIC` normalised the
+ * columns by default (normalize=True, which the coordinate-descent refit
+ * did not) and scored n·MSE / var(y) + 2·df, i.e. took var(y) as the noise
+ * variance (lassoCriterion with noiseVariance = var(y) reproduces that).
  *
  * Our choices: the reduced input sets of lear-features.ts where the days
  * cannot support the published one (noted in `note`); days whose inputs or
