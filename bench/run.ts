@@ -7,7 +7,7 @@ import {
 } from '../src/engine';
 
 const TEST_DAYS = Number(process.env.BENCH_TEST_DAYS ?? 91);
-const MODELS = (process.env.BENCH_MODELS ?? 'blend,neural,linear,weekday-rule,naive-week').split(',');
+const MODELS = (process.env.BENCH_MODELS ?? 'blend,neural,linear,lear,weekday-rule,naive-week').split(',');
 const MARKETS = (process.env.BENCH_MARKETS ?? 'demo,solar').split(',');
 // e.g. BENCH_OPTIONS='{"network":{"hiddenLayers":[16]}}' to try other settings
 const OPTIONS = JSON.parse(process.env.BENCH_OPTIONS ?? '{}');

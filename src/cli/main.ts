@@ -7,7 +7,7 @@ import { scoreCommand } from './commands/score';
 import { trainCommand } from './commands/train';
 import { addModelFlags } from './model-flags';
 
-const MODELS = ['blend', 'neural', 'linear', 'naive-day', 'naive-week', 'weekday-rule'];
+const MODELS = ['blend', 'neural', 'linear', 'lear', 'naive-day', 'naive-week', 'weekday-rule'];
 
 /**
  * The `spotloom` command line. Returns the exit code: 0 success, 2 bad
@@ -32,7 +32,7 @@ export async function main(argv: string[]): Promise<number> {
     .requiredOption('--test-start <date>', 'first delivery day to forecast (YYYY-MM-DD)')
     .option('--test-end <date>', 'last delivery day to forecast (YYYY-MM-DD)')
     .addOption(new Option('--model <name>', 'model').choices(MODELS).default('blend'))
-    .option('--retrain-every <days>', 'refresh the model every this many days (0 = never; default 1 for linear, 7 for blend and neural)')
+    .option('--retrain-every <days>', 'refresh the model every this many days (0 = never; default 1 for blend, linear and lear: the linear parts take in every day and the blend\'s networks warm-start weekly; 7 for neural)')
     .addOption(zone()).addOption(missing()).addOption(delimiter()).addOption(decimal())
     .option('--out <file>', 'write timestamp,forecast,lower,upper,actual')
     .option('--json', 'print one JSON summary on stdout'))

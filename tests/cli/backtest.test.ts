@@ -61,4 +61,19 @@ describe('spotloom backtest', () => {
     expect(fill.status).toBe(0);
     expect(fill.stderr).toMatch(/1 period has no price; model inputs take the same period of the nearest earlier day/);
   });
+  it('--model lear backtests from 28 days of history and refuses fewer, naming the days it needs', () => {
+    const dir = scratch();
+    const f = file(dir);
+    const r = runCli(['backtest', '--input', f, '--test-start', '2025-04-07', '--model', 'lear', '--json']);
+    expect(r.status).toBe(0);
+    const summary = JSON.parse(r.stdout.trim().split('\n').pop()!);
+    expect(summary.model).toBe('lear');
+    expect(summary.retrain_every).toBe(1);
+    expect(summary.periods).toBeGreaterThan(24);
+    expect(Number.isFinite(summary.mae)).toBe(true);
+    const short = runCli(['backtest', '--input', f, '--test-start', '2025-03-31', '--model', 'lear']);
+    expect(short.status).toBe(2);
+    expect(short.stderr.trim()).toMatch(/--test-start 2025-03-31 leaves 21 days of history before it; model lear needs at least 28$/);
+    expect(short.stderr).not.toMatch(/^\s+at .*:\d+/m);
+  });
 });

@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { createModel, DEFAULT_LEARNER_SETTINGS, InputError, Learner, MODEL_NAMES } from '../../../src/engine';
 
 describe('createModel(name, options)', () => {
-  it('knows the three learned models and the three baselines', () => {
-    expect([...MODEL_NAMES]).toEqual(['blend', 'neural', 'linear', 'naive-day', 'naive-week', 'weekday-rule']);
+  it('knows the three learned models, the LEAR benchmark and the three baselines', () => {
+    expect([...MODEL_NAMES]).toEqual(['blend', 'neural', 'linear', 'lear', 'naive-day', 'naive-week', 'weekday-rule']);
   });
 
   it.each([...MODEL_NAMES])('gives a fresh model named %s', (name) => {
@@ -35,6 +35,6 @@ describe('createModel(name, options)', () => {
 
   it.each(['', 'Blend', 'naive', 'ridge', 'toString'])('refuses the unknown name %j and lists the known ones', (name) => {
     expect(() => createModel(name)).toThrow(InputError);
-    expect(() => createModel(name)).toThrow(`unknown model "${name}"; choose one of blend, neural, linear, naive-day, naive-week, weekday-rule`);
+    expect(() => createModel(name)).toThrow(`unknown model "${name}"; choose one of blend, neural, linear, lear, naive-day, naive-week, weekday-rule`);
   });
 });
