@@ -5,6 +5,7 @@ import { RIDGE_LAMBDAS } from './learner-settings';
 import { addRidgeDay, predictRidge, ridgeGram, solveRidge } from './ridge';
 import type { Standardiser } from './standardiser';
 import type { TrainingDay } from './training-days';
+import type { UnitRange } from './unit-range';
 
 /**
  * Ridge models on several calibration windows (the last W usable days;
@@ -12,7 +13,7 @@ import type { TrainingDay } from './training-days';
  * a robust gain in day-ahead forecasting (Hubicka, Marcjasz & Weron 2019,
  * "A note on averaging day-ahead electricity price forecasts across
  * calibration window lengths", IEEE Trans. Sustainable Energy 10(1)).
- * Each window gets its own penalty, chosen on the validation block.
+ * Each window gets its own penalty, chosen on the tuning block (blocks.ts).
  * Measured on our invented markets (npm run bench), windows shorter than a
  * year lost accuracy, so the default pairs the whole history with the last
  * year only.
@@ -36,32 +37,40 @@ export function windowOf(days: TrainingDay[], window: number): TrainingDay[] {
 }
 
 /**
- * Chooses each member's penalty on `val` after fitting on `train`, then
- * refits every member on `all` (train and validation together).
+ * Chooses each member's penalty on `tuning` after fitting on `fit`. A window
+ * at least as long as `fit` is the expanding one again and is left out.
+ * @returns the members as fitted on `fit`, for forecasts of the tuning block
  */
-export function fitLinearEnsemble(
-  train: TrainingDay[], val: TrainingDay[], all: TrainingDay[], s: Standardiser, m: number,
+export function chooseLinearMembers(
+  fit: TrainingDay[], tuning: TrainingDay[], s: Standardiser, m: number, bounds: UnitRange,
   score: (preds: Float64Array[]) => number,
-): { members: LinearMember[]; trainOnly: LinearMember[]; sums: MemberSums[] } {
-  const members: LinearMember[] = [], trainOnly: LinearMember[] = [], sums: MemberSums[] = [];
+): LinearMember[] {
+  const chosen: LinearMember[] = [];
   for (const window of LINEAR_WINDOWS) {
-    // a window longer than the history is the expanding one again
-    if (window > 0 && window >= train.length) continue;
-    const part = windowOf(train, window);
+    if (window > 0 && window >= fit.length) continue;
+    const part = windowOf(fit, window);
     const gram = ridgeGram(part.map((d) => d.x), part.map((d) => d.y!), s);
     let best: LinearMember | undefined, bestScore = Infinity;
     for (const lambda of RIDGE_LAMBDAS) {
       const weights = solveRidge(gram, lambda);
-      const e = score(val.map((d) => linearPrice([{ window, lambda, weights }], s, d.x, m, d.scale)));
+      const e = score(tuning.map((d) => linearPrice([{ window, lambda, weights }], s, d.x, m, d.scale, bounds)));
       if (e < bestScore) { bestScore = e; best = { window, lambda, weights }; }
     }
-    trainOnly.push(best!);
-    const full = windowOf(all, window);
-    const fullGram = ridgeGram(full.map((d) => d.x), full.map((d) => d.y!), s);
-    members.push({ window, lambda: best!.lambda, weights: solveRidge(fullGram, best!.lambda) });
-    sums.push({ gram: fullGram, days: [...full] });
+    chosen.push(best!);
   }
-  return { members, trainOnly, sums };
+  return chosen;
+}
+
+/** The chosen members (window and penalty) fitted again on `days`, with their running sums. */
+export function refitLinearMembers(chosen: LinearMember[], days: TrainingDay[], s: Standardiser): { members: LinearMember[]; sums: MemberSums[] } {
+  const members: LinearMember[] = [], sums: MemberSums[] = [];
+  for (const { window, lambda } of chosen) {
+    const part = windowOf(days, window);
+    const gram = ridgeGram(part.map((d) => d.x), part.map((d) => d.y!), s);
+    members.push({ window, lambda, weights: solveRidge(gram, lambda) });
+    sums.push({ gram, days: [...part] });
+  }
+  return { members, sums };
 }
 
 /**

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { fromScaled } from '../../../src/engine/features/level-scale';
 import { RIDGE_LAMBDAS } from '../../../src/engine/models/learner-settings';
 import {
-  advanceMember, fitLinearEnsemble, LINEAR_WINDOWS, linearPrice, windowOf, type LinearMember, type MemberSums,
+  advanceMember, chooseLinearMembers, LINEAR_WINDOWS, refitLinearMembers, linearPrice, windowOf, type LinearMember, type MemberSums,
 } from '../../../src/engine/models/linear-ensemble';
 import { predictRidge, ridgeGram, solveRidge } from '../../../src/engine/models/ridge';
 import { fitStandardiser, type Standardiser } from '../../../src/engine/models/standardiser';
@@ -77,40 +77,45 @@ describe('advanceMember(member, sums, fresh, s)', () => {
   });
 });
 
-describe('fitLinearEnsemble(train, val, all, s, m, score)', () => {
+const noBounds = { lo: new Float64Array(m).fill(-Infinity), hi: new Float64Array(m).fill(Infinity) };
+
+describe('chooseLinearMembers(fit, tuning, s, m, bounds, score) and refitLinearMembers(chosen, days, s)', () => {
   it('fits one member on the expanding window when the history is shorter than a year', () => {
-    const all = days(80), train = all.slice(0, 60), val = all.slice(60);
-    const s = fitStandardiser(train.map((d) => d.x));
-    const { members, trainOnly, sums } = fitLinearEnsemble(train, val, all, s, m, mae(val));
-    expect(members.map((x) => x.window)).toEqual([0]);
-    expect(trainOnly).toHaveLength(1);
+    const all = days(80), fit = all.slice(0, 60), tuning = all.slice(60);
+    const s = fitStandardiser(fit.map((d) => d.x));
+    const chosen = chooseLinearMembers(fit, tuning, s, m, noBounds, mae(tuning));
+    expect(chosen.map((x) => x.window)).toEqual([0]);
+    const { members, sums } = refitLinearMembers(chosen, all, s);
+    expect(members).toHaveLength(1);
     expect(sums[0].days).toHaveLength(80);
   });
 
-  it('chooses each penalty as the one with the lowest validation score, then refits on all days', () => {
-    const all = days(420, 1.5), train = all.slice(0, 380), val = all.slice(380);
-    const s = fitStandardiser(train.map((d) => d.x));
-    const score = mae(val);
-    const { members, trainOnly, sums } = fitLinearEnsemble(train, val, all, s, m, score);
-    expect(members.map((x) => x.window)).toEqual(LINEAR_WINDOWS);
-    members.forEach((member, k) => {
-      const part = windowOf(train, member.window);
+  it('chooses each penalty as the one with the lowest tuning score, and refits with it on the days given', () => {
+    const all = days(420, 1.5), fit = all.slice(0, 380), tuning = all.slice(380);
+    const s = fitStandardiser(fit.map((d) => d.x));
+    const score = mae(tuning);
+    const chosen = chooseLinearMembers(fit, tuning, s, m, noBounds, score);
+    const { members, sums } = refitLinearMembers(chosen, all, s);
+    expect(chosen.map((x) => x.window)).toEqual(LINEAR_WINDOWS);
+    chosen.forEach((member, k) => {
+      const part = windowOf(fit, member.window);
       const gram = ridgeGram(part.map((d) => d.x), part.map((d) => d.y!), s);
-      const scores = RIDGE_LAMBDAS.map((lambda) => score(val.map((d) => linearPrice([{ window: member.window, lambda, weights: solveRidge(gram, lambda) }], s, d.x, m, d.scale))));
+      const scores = RIDGE_LAMBDAS.map((lambda) => score(tuning.map((d) => linearPrice([{ window: member.window, lambda, weights: solveRidge(gram, lambda) }], s, d.x, m, d.scale))));
       expect(member.lambda).toBe(RIDGE_LAMBDAS[scores.indexOf(Math.min(...scores))]);
-      expect(trainOnly[k].lambda).toBe(member.lambda);
+      expectFloat32Close(member.weights, solveRidge(gram, member.lambda));
+      expect(members[k].lambda).toBe(member.lambda);
       const full = windowOf(all, member.window);
-      expectFloat32Close(member.weights, solveRidge(ridgeGram(full.map((d) => d.x), full.map((d) => d.y!), s), member.lambda));
+      expectFloat32Close(members[k].weights, solveRidge(ridgeGram(full.map((d) => d.x), full.map((d) => d.y!), s), member.lambda));
       expect(sums[k].days.map((d) => d.day)).toEqual(full.map((d) => d.day));
     });
   });
 
   it('picks the smallest penalty on noiseless linear data and then reproduces it closely', () => {
-    const all = days(80, 0), train = all.slice(0, 60), val = all.slice(60);
-    const s = fitStandardiser(train.map((d) => d.x));
-    const { members } = fitLinearEnsemble(train, val, all, s, m, mae(val));
+    const all = days(80, 0), fit = all.slice(0, 60), tuning = all.slice(60);
+    const s = fitStandardiser(fit.map((d) => d.x));
+    const { members } = refitLinearMembers(chooseLinearMembers(fit, tuning, s, m, noBounds, mae(tuning)), all, s);
     expect(members[0].lambda).toBe(RIDGE_LAMBDAS[0]);
-    expect(mae(val)(val.map((d) => linearPrice(members, s, d.x, m, d.scale)))).toBeLessThan(0.01);
+    expect(mae(tuning)(tuning.map((d) => linearPrice(members, s, d.x, m, d.scale)))).toBeLessThan(0.01);
   });
 });
 
