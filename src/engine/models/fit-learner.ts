@@ -22,8 +22,9 @@ export const MIN_TRAINING_DAYS = 56;
 
 /**
  * Fits a learner on every day of `view` (blocks.ts says how the days are
- * cut): the ridge members' penalties, the networks' early stopping and the
- * blend weight are chosen on the tuning block; the holdout block, which took
+ * cut): the ridge members' penalties by blocked cross-validation over the
+ * fit and tuning blocks, the networks' early stopping and the blend weight
+ * on the tuning block; the holdout block, which took
  * part in none of those choices, gives the reported error, the permutation
  * importance and the first errors of the bands; then the linear part is
  * refitted on every day and the networks are warm-started on every day.
@@ -47,9 +48,9 @@ export function fitLearner(view: DayFrame, s: LearnerSettings, progress?: Progre
   const m = view.slots;
   const scorer = (block: TrainingDay[]) => (preds: Float64Array[]) => meanAbsError(block.map((d) => view.price[d.day]), preds);
 
-  // linear part: penalties chosen on the tuning block, then fitted on fit + tuning for the holdout
-  const chosen = chooseLinearMembers(fit, tuning, standardiser, m, range, scorer(tuning));
-  const beforeHoldout = refitLinearMembers(chosen, [...fit, ...tuning], standardiser).members;
+  // linear part: penalties by blocked cross-validation over fit + tuning (the holdout stays out)
+  const beforeHoldout = chooseLinearMembers([...fit, ...tuning], standardiser, m, range, days.length);
+  const onFit = refitLinearMembers(beforeHoldout, fit, standardiser).members;
   const linearOn = (members: LinearMember[], block: TrainingDay[]) => block.map((d) => linearPrice(members, standardiser, d.x, m, d.scale, range));
   progress?.(1, 1, 'linear model');
 
@@ -59,7 +60,7 @@ export function fitLearner(view: DayFrame, s: LearnerSettings, progress?: Progre
   const runs = networks.map(loadNetwork);
   const neuralOn = (block: TrainingDay[]) => block.map((d) => ensemblePrice(runs, standardiser, range, d.x, d.scale));
 
-  const linTuning = linearOn(chosen, tuning);
+  const linTuning = linearOn(onFit, tuning);
   const nnTuning = networks.length ? neuralOn(tuning) : [];
   const neuralWeight = s.kind === 'neural' ? 1 : s.kind === 'linear' ? 0 : bestMixWeight(nnTuning, linTuning, scorer(tuning));
   const linHoldout = linearOn(beforeHoldout, holdout);
@@ -84,7 +85,7 @@ export function fitLearner(view: DayFrame, s: LearnerSettings, progress?: Progre
   holdout.forEach((d, i) => addResiduals(residuals, view.price[d.day], combined[i], d.scale.scale));
 
   // the stored model learns from every day, the holdout included
-  const final = refitLinearMembers(chosen, days, standardiser);
+  const final = refitLinearMembers(beforeHoldout, days, standardiser);
   if (networks.length && s.warmEpochs > 0) {
     networks = refreshNetworks(networks, networkSamples(days, standardiser, range), s, view.price.length);
     progress?.(1, 1, 'warm start');

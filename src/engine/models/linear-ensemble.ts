@@ -36,27 +36,46 @@ export function windowOf(days: TrainingDay[], window: number): TrainingDay[] {
   return window > 0 ? days.slice(-window) : days;
 }
 
+/** Contiguous folds of the blocked cross-validation that chooses each member's penalty. */
+export const PENALTY_FOLDS = 5;
+
 /**
- * Chooses each member's penalty on `tuning` after fitting on `fit`. A window
- * at least as long as `fit` is the expanding one again and is left out.
- * @returns the members as fitted on `fit`, for forecasts of the tuning block
+ * Chooses each member's penalty by blocked cross-validation over `days`
+ * (the member's window of them): the days are cut into PENALTY_FOLDS
+ * contiguous folds, each fold is forecast by ridge fits on the other folds,
+ * and the penalty with the lowest MAE in price units over all folds wins.
+ * Contiguous folds keep neighbouring, correlated days together (blocked
+ * cross-validation for dependent data: Bergmeir & Benítez 2012, "On the use
+ * of cross-validation for time series predictor evaluation", Information
+ * Sciences 191). Every day of `days` serves, so the choice does not hinge on
+ * one season's block. A window at least as long as all `totalDays` the
+ * members will be refitted on is the expanding one again and is left out.
+ *
+ * @returns one member per window, fitted on all of `days` with its penalty
  */
-export function chooseLinearMembers(
-  fit: TrainingDay[], tuning: TrainingDay[], s: Standardiser, m: number, bounds: UnitRange,
-  score: (preds: Float64Array[]) => number,
-): LinearMember[] {
+export function chooseLinearMembers(days: TrainingDay[], s: Standardiser, m: number, bounds: UnitRange, totalDays = days.length): LinearMember[] {
   const chosen: LinearMember[] = [];
   for (const window of LINEAR_WINDOWS) {
-    if (window > 0 && window >= fit.length) continue;
-    const part = windowOf(fit, window);
+    if (window > 0 && window >= totalDays) continue;
+    const part = windowOf(days, window);
     const gram = ridgeGram(part.map((d) => d.x), part.map((d) => d.y!), s);
-    let best: LinearMember | undefined, bestScore = Infinity;
-    for (const lambda of RIDGE_LAMBDAS) {
-      const weights = solveRidge(gram, lambda);
-      const e = score(tuning.map((d) => linearPrice([{ window, lambda, weights }], s, d.x, m, d.scale, bounds)));
-      if (e < bestScore) { bestScore = e; best = { window, lambda, weights }; }
+    const folds = Math.min(PENALTY_FOLDS, part.length);
+    const errors = new Float64Array(RIDGE_LAMBDAS.length);
+    for (let f = 0; f < folds; f++) {
+      const held = part.slice(Math.floor((f * part.length) / folds), Math.floor(((f + 1) * part.length) / folds));
+      const rest = { ...gram, xtx: Float64Array.from(gram.xtx), xty: Float64Array.from(gram.xty) };
+      for (const d of held) addRidgeDay(rest, s, d.x, d.y!, -1);
+      RIDGE_LAMBDAS.forEach((lambda, k) => {
+        const weights = solveRidge(rest, lambda);
+        for (const d of held) {
+          const z = linearPrice([{ window, lambda, weights }], s, d.x, m, d.scale, bounds);
+          for (let c = 0; c < m; c++) errors[k] += Math.abs(fromScaled(d.y![c], d.scale) - z[c]);
+        }
+      });
     }
-    chosen.push(best!);
+    let best = 0;
+    for (let k = 1; k < errors.length; k++) if (errors[k] < errors[best]) best = k;
+    chosen.push({ window, lambda: RIDGE_LAMBDAS[best], weights: solveRidge(gram, RIDGE_LAMBDAS[best]) });
   }
   return chosen;
 }

@@ -79,43 +79,63 @@ describe('advanceMember(member, sums, fresh, s)', () => {
 
 const noBounds = { lo: new Float64Array(m).fill(-Infinity), hi: new Float64Array(m).fill(Infinity) };
 
-describe('chooseLinearMembers(fit, tuning, s, m, bounds, score) and refitLinearMembers(chosen, days, s)', () => {
+describe('chooseLinearMembers(days, s, m, bounds, totalDays)', () => {
   it('fits one member on the expanding window when the history is shorter than a year', () => {
-    const all = days(80), fit = all.slice(0, 60), tuning = all.slice(60);
-    const s = fitStandardiser(fit.map((d) => d.x));
-    const chosen = chooseLinearMembers(fit, tuning, s, m, noBounds, mae(tuning));
+    const all = days(80);
+    const s = fitStandardiser(all.map((d) => d.x));
+    const chosen = chooseLinearMembers(all, s, m, noBounds);
     expect(chosen.map((x) => x.window)).toEqual([0]);
-    const { members, sums } = refitLinearMembers(chosen, all, s);
-    expect(members).toHaveLength(1);
-    expect(sums[0].days).toHaveLength(80);
+    expectFloat32Close(chosen[0].weights, solveRidge(ridgeGram(all.map((d) => d.x), all.map((d) => d.y!), s), chosen[0].lambda));
   });
 
-  it('chooses each penalty as the one with the lowest tuning score, and refits with it on the days given', () => {
-    const all = days(420, 1.5), fit = all.slice(0, 380), tuning = all.slice(380);
-    const s = fitStandardiser(fit.map((d) => d.x));
-    const score = mae(tuning);
-    const chosen = chooseLinearMembers(fit, tuning, s, m, noBounds, score);
-    const { members, sums } = refitLinearMembers(chosen, all, s);
-    expect(chosen.map((x) => x.window)).toEqual(LINEAR_WINDOWS);
-    chosen.forEach((member, k) => {
-      const part = windowOf(fit, member.window);
-      const gram = ridgeGram(part.map((d) => d.x), part.map((d) => d.y!), s);
-      const scores = RIDGE_LAMBDAS.map((lambda) => score(tuning.map((d) => linearPrice([{ window: member.window, lambda, weights: solveRidge(gram, lambda) }], s, d.x, m, d.scale))));
-      expect(member.lambda).toBe(RIDGE_LAMBDAS[scores.indexOf(Math.min(...scores))]);
-      expectFloat32Close(member.weights, solveRidge(gram, member.lambda));
-      expect(members[k].lambda).toBe(member.lambda);
-      const full = windowOf(all, member.window);
-      expectFloat32Close(members[k].weights, solveRidge(ridgeGram(full.map((d) => d.x), full.map((d) => d.y!), s), member.lambda));
-      expect(sums[k].days.map((d) => d.day)).toEqual(full.map((d) => d.day));
-    });
+  it('keeps a one-year member when the days it is refitted on exceed a year', () => {
+    const all = days(400), some = all.slice(0, 350);
+    const s = fitStandardiser(some.map((d) => d.x));
+    expect(chooseLinearMembers(some, s, m, noBounds).map((x) => x.window)).toEqual([0]);
+    expect(chooseLinearMembers(some, s, m, noBounds, all.length).map((x) => x.window)).toEqual(LINEAR_WINDOWS);
+    expect(refitLinearMembers(chooseLinearMembers(some, s, m, noBounds, all.length), all, s).sums[1].days).toHaveLength(364);
+  });
+
+  it('chooses the penalty with the lowest MAE over five contiguous folds, each forecast by a fit on the other days', () => {
+    const all = days(120, 1.5);
+    const s = fitStandardiser(all.map((d) => d.x));
+    // the folds by hand: days 0-23, 24-47, 48-71, 72-95, 96-119, each fitted from scratch on the rest
+    const cvError = (lambda: number) => {
+      let sum = 0;
+      for (let f = 0; f < 5; f++) {
+        const held = all.slice(24 * f, 24 * (f + 1));
+        const rest = all.filter((_, i) => i < 24 * f || i >= 24 * (f + 1));
+        const weights = solveRidge(ridgeGram(rest.map((d) => d.x), rest.map((d) => d.y!), s), lambda);
+        sum += mae(held)(held.map((d) => linearPrice([{ window: 0, lambda, weights }], s, d.x, m, d.scale))) * held.length * m;
+      }
+      return sum;
+    };
+    const errors = RIDGE_LAMBDAS.map(cvError);
+    const [member] = chooseLinearMembers(all, s, m, noBounds);
+    expect(member.lambda).toBe(RIDGE_LAMBDAS[errors.indexOf(Math.min(...errors))]);
   });
 
   it('picks the smallest penalty on noiseless linear data and then reproduces it closely', () => {
-    const all = days(80, 0), fit = all.slice(0, 60), tuning = all.slice(60);
-    const s = fitStandardiser(fit.map((d) => d.x));
-    const { members } = refitLinearMembers(chooseLinearMembers(fit, tuning, s, m, noBounds, mae(tuning)), all, s);
+    const all = days(80, 0);
+    const s = fitStandardiser(all.map((d) => d.x));
+    const members = chooseLinearMembers(all, s, m, noBounds);
     expect(members[0].lambda).toBe(RIDGE_LAMBDAS[0]);
-    expect(mae(tuning)(tuning.map((d) => linearPrice(members, s, d.x, m, d.scale)))).toBeLessThan(0.01);
+    expect(mae(all)(all.map((d) => linearPrice(members, s, d.x, m, d.scale)))).toBeLessThan(0.01);
+  });
+});
+
+describe('refitLinearMembers(chosen, days, s)', () => {
+  it('fits each chosen window and penalty again on the days given, with their sums', () => {
+    const all = days(420, 1.5);
+    const s = fitStandardiser(all.map((d) => d.x));
+    const chosen = chooseLinearMembers(all.slice(0, 380), s, m, noBounds, all.length);
+    const { members, sums } = refitLinearMembers(chosen, all, s);
+    members.forEach((member, k) => {
+      expect(member.lambda).toBe(chosen[k].lambda);
+      const full = windowOf(all, member.window);
+      expectFloat32Close(member.weights, solveRidge(ridgeGram(full.map((d) => d.x), full.map((d) => d.y!), s), member.lambda));
+      expect(sums[k].days.map((d) => d.day)).toEqual(full.map((d) => d.day));
+    });
   });
 });
 
