@@ -1,7 +1,7 @@
 import { InputError } from '../errors';
 import { historyNeeded } from '../features/day-features';
 import { targetDay, type DayFrame } from '../series/day-frame';
-import { addResiduals, band } from './bands';
+import { addResiduals, bands, REPORTED_COVERAGES } from './bands';
 import { mix } from './blend-weights';
 import { ensemblePrice, fitLearner, MIN_TRAINING_DAYS } from './fit-learner';
 import type { LearnerState } from './learner-state';
@@ -51,6 +51,10 @@ export class Learner implements DayAheadModel {
     if (state) this.adopt(state);
   }
 
+  get coverage(): number {
+    return this.settings.coverage;
+  }
+
   get minHistoryDays(): number {
     return MIN_TRAINING_DAYS + this.settings.scaleWindow;
   }
@@ -75,14 +79,15 @@ export class Learner implements DayAheadModel {
     if (!f) throw new InputError(`cannot forecast ${view.days[d].date}: it needs ${historyNeeded(state.setup)} days of known prices before it`);
     this.catchUpErrors(view, d);
     const point = this.pointForecast(f.x, f.scale);
-    const { lower, upper } = band(state.residuals, point, f.scale.scale, this.settings.coverage);
+    const [own, ...reported] = bands(state.residuals, point, f.scale.scale, [this.settings.coverage, ...REPORTED_COVERAGES]);
+    const { lower, upper } = own;
     // a damaged or hand-edited model, or inputs far outside anything trained on, can overflow sinh
     const infinite = (v: number) => v === Infinity || v === -Infinity;
     if (!point.every(Number.isFinite) || lower.some(infinite) || upper.some(infinite)) {
       throw new InputError(`model ${this.name} gave a forecast for ${view.days[d].date} that is not a finite number; its inputs or the stored model are far out of range`);
     }
     this.issued.set(d, { point, scale: f.scale.scale });
-    return { point, lower, upper };
+    return { point, lower, upper, bands: reported };
   }
 
   /** Takes in the days that became known since the last fit or update. */

@@ -35,11 +35,20 @@ describe('Learner (blend, neural, linear) in a backtest', () => {
     expect(backtest('blend', series, 7)).toEqual(backtest('blend', series, 7));
   });
 
-  it('beats naive-week clearly on a series whose price follows its driver', () => {
+  it('beats naive-week clearly on a series whose price follows its driver, with bands near their nominal coverage', () => {
+    const long = syntheticSeries(300);
+    const frame = inputFrame(long);
     const model = createModel('linear', SMALL);
-    const { summary } = runBacktest(model, inputFrame(series), series, { testStart, retrainEvery: 1 });
+    const { summary } = runBacktest(model, frame, long, { testStart: frame.days[frame.days.length - 60].date, retrainEvery: 1 });
     expect(summary.rmae).toBeLessThan(0.85);
-    expect(summary.coverage).toBeGreaterThan(0.7);
+    expect(summary.nominalCoverage).toBe(0.9);
+    // split-conformal bands on 60 days x 24 hours; target of the accuracy work: within 2.5 points of nominal
+    expect(summary.bands!.map((b) => b.nominal)).toEqual([0.5, 0.8, 0.9, 0.98]);
+    for (const b of summary.bands!) {
+      expect(b.periods).toBeGreaterThan(900);
+      expect(Math.abs(b.coverage - b.nominal)).toBeLessThanOrEqual(0.025);
+    }
+    expect(summary.coverage).toBe(summary.bands![2].coverage);
   });
 
   it('refuses to train on too little history and to forecast without the drivers it needs', () => {
