@@ -24,7 +24,7 @@ export function addModelFlags(cmd: Command): Command {
     .option('--momentum <m>', 'momentum, 0 <= m < 1 (a large momentum wants a small learning rate)')
     .option('--iterations <n>', 'most training epochs per network (early stopping may end sooner)')
     .option('--ensemble <n>', 'networks averaged, each from its own seed')
-    .option('--features <groups>', `comma-separated feature groups (${ALL_FEATURE_GROUPS.join(', ')})`)
+    .option('--features <groups>', `comma-separated feature groups (${ALL_FEATURE_GROUPS.join(', ')}; default: all but price_year_ago)`)
     .option('--coverage <c>', 'nominal coverage of the prediction bands, e.g. 0.9');
 }
 

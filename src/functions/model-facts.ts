@@ -7,10 +7,15 @@ import { isOmitted, textArg } from './cells';
  * text (YYYY-MM-DD), so they read the same in every workbook.
  *
  * @example modelFacts(stored, 'validation_mae') // [[4.21]]
+ *
+ * `validation_*` are the holdout block's scores: days at the end of the
+ * training span that took part in no choice (models/blocks.ts); `tuning_*`
+ * are the scores on the block the choices were made on, in-sample for them.
  */
 export const MODEL_FIELDS = [
   'name', 'kind', 'trained_range', 'trained_from', 'trained_to', 'resolution', 'zone', 'features', 'drivers', 'region',
   'validation_days', 'validation_mae', 'validation_mae_linear', 'validation_mae_neural', 'validation_mae_naive_week',
+  'tuning_days', 'tuning_mae',
   'neural_weight', 'coverage', 'networks', 'hidden_layers', 'created',
 ] as const;
 
@@ -27,7 +32,7 @@ export function modelFacts(stored: StoredModel, field: unknown): (string | numbe
 }
 
 function factsOf(m: StoredModel): Record<Field, string | number> {
-  const v = m.validation;
+  const v = m.holdout;
   const num = (x: number | null) => (x === null || !Number.isFinite(x) ? '' : x);
   return {
     name: m.name,
@@ -45,6 +50,8 @@ function factsOf(m: StoredModel): Record<Field, string | number> {
     validation_mae_linear: num(v.maeLinear),
     validation_mae_neural: num(v.maeNeural),
     validation_mae_naive_week: num(v.maeNaiveWeek),
+    tuning_days: m.tuning.days,
+    tuning_mae: num(m.tuning.mae),
     neural_weight: m.neuralWeight,
     coverage: m.settings.coverage,
     networks: m.networks.length,

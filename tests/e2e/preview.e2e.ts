@@ -235,7 +235,7 @@ describe('the standalone preview in a real browser', () => {
     expect((await pv.lookAt(cell)).error).toBeNull();
     const band = await pv.readRange(`${demo.showcase.band}:K${13 + 23}`);
     band.forEach(([lower, upper]) => expect(Number(upper)).toBeGreaterThan(Number(lower)));
-    expect(Number((await pv.lookAt(demo.showcase.modelMae)).value)).toBeCloseTo(stored.validation.mae, 9);
+    expect(Number((await pv.lookAt(demo.showcase.modelMae)).value)).toBeCloseTo(stored.holdout.mae, 9);
     const facts = await pv.readRange('Outlook!I40:J41');
     expect(facts).toEqual([['name', MODEL_NAME], ['kind', stored.settings.kind]]);
     // the grid shows the numbers, marked as a spilled result

@@ -14,13 +14,14 @@ describe('modelFacts', () => {
     expect(facts.trained_to).toBe('2025-10-25');
     expect(facts.resolution).toBe(60);
     expect(facts.drivers).toBe('temp');
-    expect(facts.validation_mae).toBe(stored.validation.mae);
+    expect(facts.validation_mae).toBe(stored.holdout.mae);
+    expect(facts.tuning_mae).toBe(stored.tuning.mae);
     expect(facts.created).toBe('2025-11-01T08:00:00Z');
   });
 
   it('modelFacts(stored, field) gives one fact, field names forgiving of case and spaces', () => {
     const { stored } = fixture();
-    expect(modelFacts(stored, 'Validation MAE')).toEqual([[stored.validation.mae]]);
+    expect(modelFacts(stored, 'Validation MAE')).toEqual([[stored.holdout.mae]]);
     expect(modelFacts(stored, 'features')).toEqual([[stored.setup.groups.join(', ')]]);
   });
 

@@ -281,7 +281,7 @@ describe('parseCsv + buildSeries on generated files', () => {
 });
 
 describe('parseCsv + buildSeries on one file of 10^6 rows', () => {
-  it('reads 10^6 quarter-hours (2000-2028, Europe/Berlin) with CRLF, a gap and unknown prices in reasonable time', () => {
+  it('reads 10^6 quarter-hours (2000-2028, Europe/Berlin) with CRLF, a gap and unknown prices (its speed: npm run bench, bench/engine-speed.ts)', () => {
     const step = 900_000;
     const t0 = Date.parse('1999-12-31T23:00:00Z');
     const n = 1_000_000;
@@ -293,7 +293,6 @@ describe('parseCsv + buildSeries on one file of 10^6 rows', () => {
       parts.push(`${t},${price},${k % 977}`);
     }
     const text = parts.join('\r\n');
-    const started = Date.now();
     const { series, report } = buildSeries(parseCsv(text, 'big.csv'), { zone: 'Europe/Berlin' });
     expect(series.times.length).toBe(n);
     expect(series.resolution).toBe(15);
@@ -308,6 +307,5 @@ describe('parseCsv + buildSeries on one file of 10^6 rows', () => {
     expect(days[0].date).toBe('2000-01-01');
     expect(days.reduce((s, d) => s + d.count, 0)).toBe(n);
     expect(days.filter((d) => d.expected === 92).length).toBe(days.filter((d) => d.date.slice(5, 7) === '03' && d.expected !== 96).length);
-    expect(Date.now() - started).toBeLessThan(45_000);
   }, 90_000);
 });

@@ -90,7 +90,7 @@ describe('modelFacts(stored)', () => {
     const facts = Object.fromEntries(modelFacts(stored).map((f) => [f.label, f.value]));
     expect(facts['trained on']).toBe(`${stored.trainedFrom} to ${stored.trainedTo}`);
     expect(facts.resolution).toBe('60 minutes (24 periods a day), Europe/Berlin');
-    expect(facts['validation MAE']).toBe(`${stored.validation.mae.toFixed(2)} over the last ${stored.validation.days} days (naive-week ${stored.validation.maeNaiveWeek!.toFixed(2)})`);
+    expect(facts['validation MAE']).toBe(`${stored.holdout.mae.toFixed(2)} over the last ${stored.holdout.days} days, which took part in no training choice (naive-week ${stored.holdout.maeNaiveWeek!.toFixed(2)})`);
     expect(facts.created).toBe(stored.createdAt);
   });
 });

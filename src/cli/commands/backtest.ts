@@ -28,14 +28,20 @@ export async function backtestCommand(flags: BacktestFlags): Promise<void> {
     writeCsv(flags.out, ['timestamp', 'forecast', 'lower', 'upper', 'actual'],
       rows.map((r) => [formatTimestamp(r.time, series.zone), r.forecast, r.lower, r.upper, r.actual]));
   }
-  if (flags.json) process.stdout.write(`${JSON.stringify({ ...summary, retrain_every: retrainEvery })}\n`);
-  else {
-    const f = (x: number) => (Number.isFinite(x) ? x.toFixed(3) : 'n/a');
-    process.stdout.write(
-      `${summary.model}: ${summary.days} days, ${summary.periods} periods, MAE ${f(summary.mae)}, RMSE ${f(summary.rmse)}, ` +
-      `sMAPE ${f(summary.smape)} %, rMAE ${f(summary.rmae)}` +
-      (summary.coverage !== undefined ? `, band coverage ${(100 * summary.coverage).toFixed(1)} %` : '') +
-      ` (${summary.seconds.toFixed(1)} s)\n`,
-    );
+  const { nominalCoverage, bands, ...scores } = summary;
+  if (flags.json) {
+    process.stdout.write(`${JSON.stringify({ ...scores, nominal_coverage: nominalCoverage, bands, retrain_every: retrainEvery })}\n`);
+    return;
+  }
+  const f = (x: number) => (Number.isFinite(x) ? x.toFixed(3) : 'n/a');
+  const pct = (x: number) => `${(100 * x).toFixed(1)} %`;
+  process.stdout.write(
+    `${summary.model}: ${summary.days} ${summary.days === 1 ? 'day' : 'days'}, ${summary.periods} periods, MAE ${f(summary.mae)}, RMSE ${f(summary.rmse)}, ` +
+    `sMAPE ${f(summary.smape)} %, rMAE ${f(summary.rmae)}` +
+    (summary.coverage !== undefined ? `, band coverage ${pct(summary.coverage)}${nominalCoverage !== undefined ? ` (nominal ${pct(nominalCoverage)})` : ''}` : '') +
+    ` (${summary.seconds.toFixed(1)} s)\n`,
+  );
+  if (bands?.length) {
+    process.stdout.write(`bands: ${bands.map((b) => `nominal ${pct(b.nominal)} covered ${pct(b.coverage)}, pinball ${f(b.pinball)}`).join('; ')}\n`);
   }
 }

@@ -1,5 +1,6 @@
 import { baselineForecast } from '../baselines/naive';
 import { InputError } from '../errors';
+import { REPORTED_COVERAGES } from '../models/bands';
 import type { DayAheadModel, Progress } from '../models/model';
 import { dayIndexOf, frameBefore, type DayFrame } from '../series/day-frame';
 import { expandDay } from '../series/day-matrix';
@@ -15,6 +16,8 @@ export interface BacktestRow {
   /** naive-week forecast of the same period, the yardstick of rMAE */
   naiveWeek: number;
   day: number;
+  /** lower and upper edge at each reported coverage (summary `bands`), when the model gives them */
+  levels?: { lower: number; upper: number }[];
 }
 
 export interface BacktestOptions {
@@ -70,16 +73,23 @@ export function runBacktest(
     const lower = forecast.lower ? expandDay(day, forecast.lower) : undefined;
     const upper = forecast.upper ? expandDay(day, forecast.upper) : undefined;
     const yard = expandDay(day, naive);
+    const levels = forecast.bands?.map((b) => ({ lower: expandDay(day, b.lower), upper: expandDay(day, b.upper) }));
     for (let j = 0; j < day.count; j++) {
       const i = day.start + j;
       rows.push({
         time: series.times[i], forecast: point[j], lower: lower ? lower[j] : NaN, upper: upper ? upper[j] : NaN,
         actual: actual[i], naiveWeek: yard[j], day: d,
+        ...(levels ? { levels: levels.map((b) => ({ lower: b.lower[j], upper: b.upper[j] })) } : {}),
       });
     }
     progress?.(d - first + 1, total, 'forecast days');
   }
-  return { rows, summary: summarise(model.name, rows, (Date.now() - started) / 1000) };
+  return { rows, summary: summarise(model.name, rows, (Date.now() - started) / 1000, model.coverage, levelsOf(model)) };
+}
+
+/** The coverages of the bands a learned model reports (a model without bands reports none). */
+function levelsOf(model: DayAheadModel): number[] | undefined {
+  return model.coverage === undefined ? undefined : REPORTED_COVERAGES;
 }
 
 function testSpan(frame: DayFrame, actual: ArrayLike<number>, testStart: string, testEnd?: string) {

@@ -26,9 +26,14 @@ const FINE_LAGS = new Set([1, 7]);
 const YEAR_LAG = 364;
 
 
-/** Days of price history a feature vector needs before its target day. */
+/**
+ * Days of price history a feature vector needs before its target day. The
+ * year-ago prices are not among them: a day less than a year into the
+ * history takes 0 there (the centre of its level scale), so switching the
+ * group on never costs the first year of training days.
+ */
 export function historyNeeded(setup: FeatureSetup): number {
-  return Math.max(setup.groups.includes('price_year_ago') ? YEAR_LAG : 0, setup.groups.includes('price_changes') ? 8 : 7, setup.scaleWindow);
+  return Math.max(setup.groups.includes('price_changes') ? 8 : 7, setup.scaleWindow);
 }
 
 /** The features of each enabled group, in vector order (for importance and the pane). */
@@ -83,7 +88,10 @@ export function dayFeatures(view: DayFrame, setup: FeatureSetup): { x: Float64Ar
     const row = view.price[d - 1];
     out.push(z(mean(row)), z(Math.min(...row)), z(Math.max(...row)));
   }
-  if (g.has('price_year_ago')) priceProfile(YEAR_LAG);
+  if (g.has('price_year_ago')) {
+    if (d >= YEAR_LAG) priceProfile(YEAR_LAG);
+    else for (let h = 0; h < HOURS; h++) out.push(0);
+  }
   if (g.has('price_changes')) out.push(z(dailyMean(1)) - z(dailyMean(2)), z(dailyMean(1)) - z(dailyMean(8)));
   if (g.has('drivers_target')) for (const k of setup.drivers) out.push(...driverRow(k, 0));
   if (g.has('drivers_lagged')) for (const k of setup.drivers) out.push(...driverRow(k, 1), ...driverRow(k, 7));

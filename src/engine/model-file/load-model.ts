@@ -3,7 +3,7 @@ import { featureNames } from '../features/day-features';
 import { Learner, type LearnerState } from '../models/learner';
 import type { NetworkJson } from '../models/network';
 import { decodeFloats } from './base64-floats';
-import { MAX_MODEL_BYTES, StoredModelSchema, type StoredModel } from './model-schema';
+import { MAX_MODEL_BYTES, MODEL_FORMAT, MODEL_VERSION, StoredModelSchema, type StoredModel } from './model-schema';
 
 /**
  * Reads a stored model from untrusted text (a workbook or a file): size
@@ -20,6 +20,11 @@ export function parseStoredModel(text: string, source = 'the model'): StoredMode
     json = JSON.parse(text);
   } catch {
     throw new InputError(`${source} is not JSON`);
+  }
+  const version = (json as { format?: unknown; version?: unknown } | null)?.version;
+  if ((json as { format?: unknown } | null)?.format === MODEL_FORMAT && typeof version === 'number' && version < MODEL_VERSION) {
+    // version 1 reported its tuning-block error as its validation error and has no price range to guard inputs with
+    throw new InputError(`${source} was saved by an earlier Spotloom (model file version ${version}); train it again to use it`);
   }
   const checked = StoredModelSchema.safeParse(json);
   if (!checked.success) {
@@ -77,12 +82,19 @@ export function learnerFromStored(stored: StoredModel, source = 'the model'): Le
         return Array.from(v);
       }),
     },
-    validation: { ...stored.validation, maeNeural: stored.validation.maeNeural ?? NaN, maeNaiveWeek: stored.validation.maeNaiveWeek ?? NaN },
+    tuning: loadedScores(stored.tuning),
+    holdout: loadedScores(stored.holdout),
+    priceRange: stored.priceRange.lo <= stored.priceRange.hi ? { ...stored.priceRange } : bad('priceRange has its lowest price above its highest'),
     importance: stored.importance,
     trainedFrom: stored.trainedFrom,
     trainedTo: stored.trainedTo,
+    residualsThrough: stored.residualsThrough,
   };
   return new Learner(stored.settings, state);
+}
+
+function loadedScores(v: StoredModel['holdout']): LearnerState['holdout'] {
+  return { ...v, maeNeural: v.maeNeural ?? NaN, maeNaiveWeek: v.maeNaiveWeek ?? NaN };
 }
 
 function featureCount(stored: StoredModel): number {

@@ -4,14 +4,14 @@ import { LearnerSettingsSchema } from '../models/learner-settings';
 import { BASE64 } from './base64-floats';
 
 /**
- * The stored model, version 1: the one schema of a model saved in a
+ * The stored model, version 2: the one schema of a model saved in a
  * workbook or a file. Its TypeScript type is inferred from it. Objects are
  * strict (unknown keys are refused), names are short plain identifiers (so
  * keys like `__proto__` cannot get in), numbers are finite, and float arrays
  * are base64 text (base64-floats.ts) whose lengths are checked on load.
  */
 export const MODEL_FORMAT = 'spotloom-model';
-export const MODEL_VERSION = 1;
+export const MODEL_VERSION = 2;
 export const MAX_MODEL_BYTES = 2 * 1024 * 1024;
 
 const FORBIDDEN = new Set(['__proto__', 'constructor', 'prototype']);
@@ -25,6 +25,10 @@ const Name = StoredName;
 const Floats = z.string().max(MAX_MODEL_BYTES).regex(BASE64, 'not base64 text');
 const Finite = z.number().finite();
 const Day = z.string().regex(/^\d{4}-\d{2}-\d{2}$/);
+/** a model's errors on one block of its training days (models/blocks.ts); null where a part is absent */
+const BlockScoresSchema = z.strictObject({
+  days: z.number().int().min(0), mae: Finite, maeLinear: Finite, maeNeural: Finite.nullable(), maeNaiveWeek: Finite.nullable(),
+});
 
 export const StoredModelSchema = z.strictObject({
   format: z.literal(MODEL_FORMAT),
@@ -53,12 +57,13 @@ export const StoredModelSchema = z.strictObject({
   targetRange: z.strictObject({ lo: Floats, hi: Floats }),
   neuralWeight: Finite.min(0).max(1),
   residuals: z.strictObject({ keep: z.number().int().min(1).max(1000), bySlot: z.array(Floats).max(96) }),
-  validation: z.strictObject({
-    days: z.number().int().min(0), mae: Finite, maeLinear: Finite, maeNeural: Finite.nullable(), maeNaiveWeek: Finite.nullable(),
-  }),
+  tuning: BlockScoresSchema,
+  holdout: BlockScoresSchema,
+  priceRange: z.strictObject({ lo: Finite, hi: Finite }),
   importance: z.array(z.strictObject({ group: z.enum(ALL_FEATURE_GROUPS as [FeatureGroup, ...FeatureGroup[]]), increase: Finite })).max(ALL_FEATURE_GROUPS.length),
   trainedFrom: Day,
   trainedTo: Day,
+  residualsThrough: Day,
 });
 
 export type StoredModel = z.infer<typeof StoredModelSchema>;

@@ -1,5 +1,5 @@
 import { InputError } from '../errors';
-import type { Learner } from '../models/learner';
+import type { BlockScores, Learner } from '../models/learner';
 import type { Resolution } from '../series/series';
 import { encodeFloats } from './base64-floats';
 import { MAX_MODEL_BYTES, MODEL_FORMAT, MODEL_VERSION, StoredModelSchema, type StoredModel } from './model-schema';
@@ -40,18 +40,22 @@ export function toStoredModel(learner: Learner, meta: { name: string; zone: stri
     targetRange: { lo: f64(state.targetRange.lo), hi: f64(state.targetRange.hi) },
     neuralWeight: state.neuralWeight,
     residuals: { keep: state.residuals.keep, bySlot: state.residuals.bySlot.map((r) => encodeFloats(r, 4)) },
-    validation: {
-      ...state.validation,
-      maeNeural: Number.isFinite(state.validation.maeNeural) ? state.validation.maeNeural : null,
-      maeNaiveWeek: Number.isFinite(state.validation.maeNaiveWeek) ? state.validation.maeNaiveWeek : null,
-    },
+    tuning: storedScores(state.tuning),
+    holdout: storedScores(state.holdout),
+    priceRange: { ...state.priceRange },
     importance: state.importance.filter((i) => Number.isFinite(i.increase)),
     trainedFrom: state.trainedFrom,
     trainedTo: state.trainedTo,
+    residualsThrough: state.residualsThrough,
   };
   const checked = StoredModelSchema.safeParse(stored);
   if (!checked.success) throw new InputError(`the trained model does not fit the model file format: ${checked.error.issues[0].message}`);
   return stored;
+}
+
+function storedScores(v: BlockScores): StoredModel['holdout'] {
+  const orNull = (x: number) => (Number.isFinite(x) ? x : null);
+  return { ...v, maeNeural: orNull(v.maeNeural), maeNaiveWeek: orNull(v.maeNaiveWeek) };
 }
 
 export function storedModelText(stored: StoredModel): string {

@@ -1,5 +1,5 @@
 import { z } from '../schema-config';
-import { ALL_FEATURE_GROUPS, type FeatureGroup } from '../features/feature-groups';
+import { ALL_FEATURE_GROUPS, DEFAULT_FEATURE_GROUPS, type FeatureGroup } from '../features/feature-groups';
 import { DEFAULT_NETWORK_OPTIONS, NetworkOptionsSchema } from './network-options';
 
 /** Settings of a learned model (blend, neural or linear), as the pane and CLI give them. */
@@ -23,7 +23,7 @@ export type LearnerSettings = z.infer<typeof LearnerSettingsSchema>;
 
 export const DEFAULT_LEARNER_SETTINGS: LearnerSettings = {
   kind: 'blend',
-  groups: [...ALL_FEATURE_GROUPS],
+  groups: [...DEFAULT_FEATURE_GROUPS],
   seed: 1,
   network: DEFAULT_NETWORK_OPTIONS,
   scaleWindow: 56,

@@ -5,6 +5,7 @@ import { RIDGE_LAMBDAS } from './learner-settings';
 import { addRidgeDay, predictRidge, ridgeGram, solveRidge } from './ridge';
 import type { Standardiser } from './standardiser';
 import type { TrainingDay } from './training-days';
+import type { UnitRange } from './unit-range';
 
 /**
  * Ridge models on several calibration windows (the last W usable days;
@@ -12,7 +13,7 @@ import type { TrainingDay } from './training-days';
  * a robust gain in day-ahead forecasting (Hubicka, Marcjasz & Weron 2019,
  * "A note on averaging day-ahead electricity price forecasts across
  * calibration window lengths", IEEE Trans. Sustainable Energy 10(1)).
- * Each window gets its own penalty, chosen on the validation block.
+ * Each window gets its own penalty, chosen on the tuning block (blocks.ts).
  * Measured on our invented markets (npm run bench), windows shorter than a
  * year lost accuracy, so the default pairs the whole history with the last
  * year only.
@@ -35,33 +36,60 @@ export function windowOf(days: TrainingDay[], window: number): TrainingDay[] {
   return window > 0 ? days.slice(-window) : days;
 }
 
+/** Contiguous folds of the blocked cross-validation that chooses each member's penalty. */
+export const PENALTY_FOLDS = 5;
+
 /**
- * Chooses each member's penalty on `val` after fitting on `train`, then
- * refits every member on `all` (train and validation together).
+ * Chooses each member's penalty by blocked cross-validation over `days`
+ * (the member's window of them): the days are cut into PENALTY_FOLDS
+ * contiguous folds, each fold is forecast by ridge fits on the other folds,
+ * and the penalty with the lowest MAE in price units over all folds wins.
+ * Contiguous folds keep neighbouring, correlated days together (blocked
+ * cross-validation for dependent data: Bergmeir & Benítez 2012, "On the use
+ * of cross-validation for time series predictor evaluation", Information
+ * Sciences 191). Every day of `days` serves, so the choice does not hinge on
+ * one season's block. A window at least as long as all `totalDays` the
+ * members will be refitted on is the expanding one again and is left out.
+ *
+ * @returns one member per window, fitted on all of `days` with its penalty
  */
-export function fitLinearEnsemble(
-  train: TrainingDay[], val: TrainingDay[], all: TrainingDay[], s: Standardiser, m: number,
-  score: (preds: Float64Array[]) => number,
-): { members: LinearMember[]; trainOnly: LinearMember[]; sums: MemberSums[] } {
-  const members: LinearMember[] = [], trainOnly: LinearMember[] = [], sums: MemberSums[] = [];
+export function chooseLinearMembers(days: TrainingDay[], s: Standardiser, m: number, bounds: UnitRange, totalDays = days.length): LinearMember[] {
+  const chosen: LinearMember[] = [];
   for (const window of LINEAR_WINDOWS) {
-    // a window longer than the history is the expanding one again
-    if (window > 0 && window >= train.length) continue;
-    const part = windowOf(train, window);
+    if (window > 0 && window >= totalDays) continue;
+    const part = windowOf(days, window);
     const gram = ridgeGram(part.map((d) => d.x), part.map((d) => d.y!), s);
-    let best: LinearMember | undefined, bestScore = Infinity;
-    for (const lambda of RIDGE_LAMBDAS) {
-      const weights = solveRidge(gram, lambda);
-      const e = score(val.map((d) => linearPrice([{ window, lambda, weights }], s, d.x, m, d.scale)));
-      if (e < bestScore) { bestScore = e; best = { window, lambda, weights }; }
+    const folds = Math.min(PENALTY_FOLDS, part.length);
+    const errors = new Float64Array(RIDGE_LAMBDAS.length);
+    for (let f = 0; f < folds; f++) {
+      const held = part.slice(Math.floor((f * part.length) / folds), Math.floor(((f + 1) * part.length) / folds));
+      const rest = { ...gram, xtx: Float64Array.from(gram.xtx), xty: Float64Array.from(gram.xty) };
+      for (const d of held) addRidgeDay(rest, s, d.x, d.y!, -1);
+      RIDGE_LAMBDAS.forEach((lambda, k) => {
+        const weights = solveRidge(rest, lambda);
+        for (const d of held) {
+          const z = linearPrice([{ window, lambda, weights }], s, d.x, m, d.scale, bounds);
+          for (let c = 0; c < m; c++) errors[k] += Math.abs(fromScaled(d.y![c], d.scale) - z[c]);
+        }
+      });
     }
-    trainOnly.push(best!);
-    const full = windowOf(all, window);
-    const fullGram = ridgeGram(full.map((d) => d.x), full.map((d) => d.y!), s);
-    members.push({ window, lambda: best!.lambda, weights: solveRidge(fullGram, best!.lambda) });
-    sums.push({ gram: fullGram, days: [...full] });
+    let best = 0;
+    for (let k = 1; k < errors.length; k++) if (errors[k] < errors[best]) best = k;
+    chosen.push({ window, lambda: RIDGE_LAMBDAS[best], weights: solveRidge(gram, RIDGE_LAMBDAS[best]) });
   }
-  return { members, trainOnly, sums };
+  return chosen;
+}
+
+/** The chosen members (window and penalty) fitted again on `days`, with their running sums. */
+export function refitLinearMembers(chosen: LinearMember[], days: TrainingDay[], s: Standardiser): { members: LinearMember[]; sums: MemberSums[] } {
+  const members: LinearMember[] = [], sums: MemberSums[] = [];
+  for (const { window, lambda } of chosen) {
+    const part = windowOf(days, window);
+    const gram = ridgeGram(part.map((d) => d.x), part.map((d) => d.y!), s);
+    members.push({ window, lambda, weights: solveRidge(gram, lambda) });
+    sums.push({ gram, days: [...part] });
+  }
+  return { members, sums };
 }
 
 /**

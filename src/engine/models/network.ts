@@ -6,7 +6,9 @@ import type { NetworkOptions } from './network-options';
  * One brain.js feed-forward network trained by back-propagation with a
  * learning rate and momentum (brain.js NeuralNetwork, sigmoid units), with
  * early stopping: every `checkEvery` epochs the validation loss is taken,
- * and the weights of the best check are restored at the end.
+ * and the weights of the best check are restored at the end. Without a
+ * validation loss (a warm start on the newest days, which leaves no block
+ * to judge on) it runs exactly `iterations` epochs and keeps the last weights.
  *
  * One network per delivery day forecasts all slots at once. `npm run
  * bench:layout` measured it against one network per period on the demo
@@ -35,7 +37,7 @@ export interface TrainReport {
 
 export function trainNetwork(
   samples: Sample[], options: NetworkOptions, seed: number,
-  validationLoss: (predict: (x: Float64Array) => Float64Array) => number,
+  validationLoss: ((predict: (x: Float64Array) => Float64Array) => number) | undefined,
   onCheck?: (epoch: number, loss: number) => void,
   start?: NetworkJson,
 ): { json: NetworkJson; report: TrainReport } {
@@ -52,15 +54,22 @@ export function trainNetwork(
       net.initialize();
     }
   });
+  const epochs = (n: number) => {
+    for (let k = 0; k < n; k++) {
+      shuffle(data, rng);
+      net.train(data, { ...trainOpts, iterations: 1 });
+    }
+  };
+  if (!validationLoss) {
+    epochs(options.iterations);
+    return { json: snapshot(net), report: { epochs: options.iterations, bestEpoch: options.iterations, validationLoss: [] } };
+  }
   const predict = (x: Float64Array) => Float64Array.from(net.run(Array.from(x) as never) as ArrayLike<number>);
   let best = snapshot(net), bestLoss = validationLoss(predict), bestEpoch = 0, stale = 0, epoch = 0;
   const losses = [bestLoss];
   while (epoch < options.iterations && stale < options.patience) {
     const n = Math.min(options.checkEvery, options.iterations - epoch);
-    for (let k = 0; k < n; k++) {
-      shuffle(data, rng);
-      net.train(data, { ...trainOpts, iterations: 1 });
-    }
+    epochs(n);
     epoch += n;
     const loss = validationLoss(predict);
     losses.push(loss);

@@ -81,13 +81,13 @@ export function shelfOf(store: ModelStore): ModelShelf {
 
 /** Facts about a stored model for the Models list and the outlook. */
 export function modelFacts(stored: StoredModel): { label: string; value: string }[] {
-  const v = stored.validation;
+  const v = stored.holdout;
   const fmt = (x: number | null) => (x === null || !Number.isFinite(x) ? 'n/a' : x.toFixed(2));
   return [
     { label: 'kind', value: stored.settings.kind },
     { label: 'trained on', value: `${stored.trainedFrom} to ${stored.trainedTo}` },
     { label: 'resolution', value: `${stored.resolution} minutes (${stored.setup.slots} periods a day), ${stored.zone}` },
-    { label: 'validation MAE', value: `${fmt(v.mae)} over the last ${v.days} days (naive-week ${fmt(v.maeNaiveWeek)})` },
+    { label: 'validation MAE', value: `${fmt(v.mae)} over the last ${v.days} ${v.days === 1 ? 'day' : 'days'}, which took part in no training choice (naive-week ${fmt(v.maeNaiveWeek)})` },
     { label: 'drivers', value: stored.setup.drivers.length ? stored.setup.drivers.join(', ') : 'none' },
     { label: 'created', value: stored.createdAt },
   ];

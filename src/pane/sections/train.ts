@@ -98,11 +98,11 @@ export function trainSection(ctx: PaneContext): HTMLElement {
     const { stored } = done;
     await ctx.refreshModels();
     store.set({ selected: modelName });
-    const v = stored.validation;
+    const v = stored.holdout;
     result.appendChild(h('dl', { class: 'loom-facts' },
       h('dt', { text: 'saved as' }), h('dd', { text: modelName, test: 'trained-name' }),
       h('dt', { text: 'trained on' }), h('dd', { text: `${stored.trainedFrom} to ${stored.trainedTo}` }),
-      h('dt', { text: 'validation MAE' }), h('dd', { test: 'validation-mae', text: `${fmt(v.mae)} over ${v.days} days (linear ${fmt(v.maeLinear)}, neural ${fmt(v.maeNeural)}, naive-week ${fmt(v.maeNaiveWeek)})` }),
+      h('dt', { text: 'validation MAE' }), h('dd', { test: 'validation-mae', text: `${fmt(v.mae)} over the last ${v.days} days, which took part in no training choice (linear ${fmt(v.maeLinear)}, neural ${fmt(v.maeNeural)}, naive-week ${fmt(v.maeNaiveWeek)})` }),
       h('dt', { text: 'neural weight' }), h('dd', { text: fmt(stored.neuralWeight) }),
       h('dt', { text: 'inputs that matter most' }), h('dd', { text: stored.importance.slice(0, 4).map((i) => `${i.group} +${fmt(i.increase)}`).join(', ') || 'n/a' }),
     ));

@@ -33,8 +33,28 @@ describe('runBacktest(model, frame, series, options)', () => {
     }
     expect(summary.mae).toBeCloseTo(sum / n, 9);
     expect(summary.periods).toBe(n);
-    expect(summary.rmae).toBeCloseTo(1, 12);
     expect(summary.days).toBe(18); // 2025-04-01 to 2025-04-18
+  });
+
+  it('rMAE of naive-day is its MAE over the naive-week MAE of the same periods, by hand', () => {
+    const s = series(40, wobble);
+    const { rows, summary } = runBacktest(baselineModel('naive-day'), inputFrame(s), s, { testStart: '2025-04-07' });
+    // hand rule: the prices at the same local wall time one day and seven days earlier
+    // (the spring change of 2025-03-30 lies before 2025-03-31, the first day lagged, so every lag exists)
+    const byWall = new Map<string, number>();
+    s.times.forEach((t, i) => byWall.set(DateTime.fromMillis(t, { zone: ZONE }).toFormat("yyyy-MM-dd'T'HH:mm"), s.price[i]));
+    const lag = (t: number, days: number) => {
+      const wall = DateTime.fromMillis(t, { zone: ZONE });
+      return byWall.get(`${wall.minus({ days }).toFormat('yyyy-MM-dd')}T${wall.toFormat('HH:mm')}`)!;
+    };
+    let day = 0, week = 0;
+    for (const r of rows) {
+      expect(r.forecast).toBe(lag(r.time, 1));
+      day += Math.abs(r.actual - lag(r.time, 1));
+      week += Math.abs(r.actual - lag(r.time, 7));
+    }
+    expect(summary.rmae).toBeCloseTo(day / week, 12);
+    expect(summary.rmae).not.toBeCloseTo(1, 2);
   });
 
   it('weekday-rule uses D-1 on Tuesday and D-7 on Monday', () => {

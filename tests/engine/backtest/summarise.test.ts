@@ -23,6 +23,17 @@ describe('summarise(model, rows, seconds)', () => {
     expect(s.days).toBe(2);
   });
 
+  it('scores each band level: coverage and the pinball loss of its edges as quantile forecasts', () => {
+    // forecast ± 5 as the 80 % band: |actual - forecast| is 1.5 9.5 6.9 1.6 4.5 5.5 2.5 7.5, so 4 of 8 inside;
+    // pinball at tau 0.1 (lower) and 0.9 (upper), averaged: 87/80 (exact rational arithmetic, Python fractions)
+    const banded = rows().map((r) => ({ ...r, levels: [{ lower: r.lower, upper: r.upper }] }));
+    const s = summarise('m', banded, 0, 0.8, [0.8]);
+    expect(s.nominalCoverage).toBe(0.8);
+    expect(s.coverage).toBe(0.5);
+    expect(s.bands).toEqual([{ nominal: 0.8, coverage: 0.5, pinball: expect.closeTo(87 / 80, 12), periods: 8 }]);
+    expect(summarise('m', rows(), 0).bands).toBeUndefined();
+  });
+
   it('gives rMAE as the MAE over the naive-week MAE on the same periods', () => {
     // naive-week is off by exactly 2 everywhere: its MAE is 2 (worked by hand)
     expect(summarise('m', rows(), 0).rmae).toBeCloseTo(small.expected.MAE / 2, 12);

@@ -88,14 +88,12 @@ describe('holidayName(date, region)', () => {
     expect(() => holidayName('', 'DE')).toThrow(InputError);
   });
 
-  it('answers every day of ten years a hundred times within a second (cached per region and year)', () => {
+  it('answers every day of ten years a hundred times with the same count (speed: npm run bench, bench/engine-speed.ts)', () => {
     const days: string[] = [];
     for (let d = '2020-01-01'; d <= '2029-12-31'; d = addDays(d, 1)) days.push(d);
     holidayName(days[0], 'DE-NW');
-    const t0 = performance.now();
     let count = 0;
     for (let r = 0; r < 100; r++) for (const d of days) if (holidayName(d, 'DE-NW') !== '') count++;
-    expect(performance.now() - t0).toBeLessThan(1000);
     expect(count).toBe(100 * [...Array(10).keys()].reduce((s, k) => s + holidaysOfYear(2020 + k, 'DE-NW').size, 0));
   });
 });

@@ -1,8 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { compareForecasts } from '../../../src/engine/compare/compare-forecasts';
-import { dailyLossDifferential } from '../../../src/engine/compare/daily-loss-differential';
-import { dieboldMariano } from '../../../src/engine/compare/diebold-mariano';
 import { InputError } from '../../../src/engine/errors';
+import ref from '../../reference/fixtures/dm-small.json';
 
 const dayOf = [0, 0, 0, 1, 1, 1, 2, 2, 2, 3, 3, 3];
 const actual = [40, 55, 61, 38, 52, -4, 45, 60, 66, 0, 49, 58];
@@ -10,16 +9,13 @@ const good = [41, 53, 60, 40, 50, 0, 44, 62, 65, 3, 47, 59];
 const poor = [45, 50, 70, 30, 60, 10, 50, 52, 60, 8, 40, 66];
 
 describe('compareForecasts(actual, a, b, dayOf, loss)', () => {
-  test('is the Diebold–Mariano test (h = 1) on the daily loss differential', () => {
-    for (const loss of ['abs', 'squared'] as const) {
-      const daily = dailyLossDifferential(actual, good, poor, dayOf, loss);
-      const dm = dieboldMariano(daily.diff, { h: 1 });
-      expect(compareForecasts(actual, good, poor, dayOf, loss)).toEqual({
-        statistic: dm.statistic,
-        pValue: dm.pValue,
-        days: 4,
-      });
-    }
+  // reference: R 4.2.2, forecast 8.20, dm.test() on the daily mean losses (calls in fixtures/dm-small.json)
+  test.each(['abs', 'squared'] as const)('with loss %s equals R dm.test() on the daily mean losses', (loss) => {
+    expect(ref.actual).toEqual(actual);
+    const r = compareForecasts(actual, good, poor, dayOf, loss);
+    expect(r.days).toBe(4);
+    expect(Math.abs(r.statistic - ref[loss].statistic)).toBeLessThan(1e-9 * Math.abs(ref[loss].statistic));
+    expect(Math.abs(r.pValue - ref[loss].pValue)).toBeLessThan(1e-7);
   });
 
   test('three days worked by hand', () => {

@@ -4,6 +4,7 @@ import {
   ALL_FEATURE_GROUPS, dayFeatures, dayFrame, dayIndexOf, featureLayout, featureNames, frameBefore, historyNeeded,
   type DayFrame, type FeatureGroup, type FeatureSetup, type Resolution, type Series,
 } from '../../../src/engine';
+import { toScaled } from '../../../src/engine/features/level-scale';
 
 /** A seeded Berlin series with a load and a wind driver, built directly in the series layout (series.ts). */
 function series(days: number, resolution: Resolution, startUtc = '2023-11-30T23:00:00Z'): Series {
@@ -113,8 +114,8 @@ describe('dayFeatures(view, setup) reads no data from the target day on', () => 
 describe('dayFeatures(view, setup) values', () => {
   it('is undefined before historyNeeded days and when an input of the day is unknown', () => {
     const setup = setupFor(hourlyFrame);
-    expect(dayFeatures(frameBefore(hourlyFrame, 363), setup)).toBeUndefined();
-    expect(dayFeatures(frameBefore(hourlyFrame, 364), setup)).toBeDefined();
+    expect(dayFeatures(frameBefore(hourlyFrame, setup.scaleWindow - 1), setup)).toBeUndefined();
+    expect(dayFeatures(frameBefore(hourlyFrame, setup.scaleWindow), setup)).toBeDefined();
     const gap = { ...frameBefore(hourlyFrame, 370), drivers: { ...hourlyFrame.drivers, load_forecast: hourlyFrame.drivers.load_forecast.map((r, i) => (i === 370 ? r.map(() => NaN) : r)) } };
     expect(dayFeatures(gap, setup)).toBeUndefined();
   });
@@ -134,10 +135,20 @@ describe('dayFeatures(view, setup) values', () => {
   });
 });
 
+describe('dayFeatures(view, setup) with price_year_ago less than a year into the history', () => {
+  it('takes 0, the centre of the level scale, for each hour of the missing year-ago day, and the prices from day 364 on', () => {
+    const setup = setupFor(hourlyFrame, ['price_year_ago']);
+    expect(Array.from(dayFeatures(frameBefore(hourlyFrame, 363), setup)!.x)).toEqual(new Array(24).fill(0));
+    const f = dayFeatures(frameBefore(hourlyFrame, 364), setup)!;
+    expect(Array.from(f.x)).toEqual(Array.from(hourlyFrame.price[0]).map((p) => toScaled(p, f.scale)));
+  });
+});
+
 describe('historyNeeded(setup)', () => {
   const base = setupFor(hourlyFrame);
   it.each([
-    [[...ALL_FEATURE_GROUPS], 28, 364],
+    // the year-ago prices need no history: a day without them takes 0 there
+    [[...ALL_FEATURE_GROUPS], 28, 28],
     [['price_lags', 'price_changes'], 28, 28],
     [['price_lags', 'price_changes'], 7, 8],
     [['price_lags'], 7, 7],

@@ -1,7 +1,7 @@
 import seedrandom from 'seedrandom';
 import { describe, expect, it } from 'vitest';
 import { gaussianSource } from '../../../src/engine/demo/gaussian';
-import { addResiduals, band, emptyPool, quantile } from '../../../src/engine/models/bands';
+import { addResiduals, band, bands, conformalRanks, emptyPool, quantile } from '../../../src/engine/models/bands';
 import ref from '../../reference/fixtures/r-quantile-mad.json';
 
 const sorted = (xs: number[]) => [...xs].sort((a, b) => a - b);
@@ -35,26 +35,43 @@ describe('addResiduals(pool, actual, forecast, scale)', () => {
   });
 });
 
+describe('conformalRanks(n, coverage)', () => {
+  // split-conformal ranks k = floor((n + 1)(1 - c)/2), k' = ceil((n + 1)(1 + c)/2) (Lei et al. 2018, JASA 113(523)), worked by hand
+  it.each([
+    [99, 0.9, 5, 95],
+    [19, 0.9, 1, 19],
+    [18, 0.9, 0, 19],
+    [11, 0.5, 3, 9],
+    [273, 0.98, 2, 272],
+  ])('with %d errors at coverage %d takes ranks %d and %d', (n, c, lo, hi) => {
+    expect(conformalRanks(n, c)).toEqual({ lo, hi });
+  });
+});
+
 describe('band(pool, point, scale, coverage)', () => {
-  it('puts the bands at the type-7 quantiles of the pooled errors of the slot and its neighbours', () => {
-    // reference: R quantile(x, c(0.05, 0.95), type = 7) = -8.125, 75.7 (r-quantile-mad.json)
+  it('puts the edges at the conformal order statistics of the pooled errors of the slot and its neighbours', () => {
+    // the 11 values of r-quantile-mad.json sorted: -12.75 -3.5 0 12.25 17 29.9 40 41.2 55.5 63.3 88.1;
+    // at 50 %: ranks 3 and 9 -> 0 and 55.5; at 90 % ranks 0 and 12 of 11, so no band
     const pool = emptyPool(24, 100);
     pool.bySlot[0] = [...ref.quantile.x]; // unsorted, as a pool holds them
     const point = new Float64Array(24).fill(100);
-    const { lower, upper } = band(pool, point, 2, 0.9);
+    const half = band(pool, point, 2, 0.5);
     for (const s of [23, 0, 1]) {
-      expect(lower[s]).toBeCloseTo(100 + 2 * -8.125, 10);
-      expect(upper[s]).toBeCloseTo(100 + 2 * 75.7, 10);
+      expect(half.lower[s]).toBe(100 + 2 * 0);
+      expect(half.upper[s]).toBe(100 + 2 * 55.5);
     }
     // slot 2 reaches slots 1..3 only: no errors there
-    expect(lower[2]).toBeNaN();
-    expect(upper[22]).toBeNaN();
+    expect(half.lower[2]).toBeNaN();
+    expect(half.upper[22]).toBeNaN();
+    const wide = band(pool, point, 2, 0.9);
+    expect(wide.lower[0]).toBeNaN();
+    expect(wide.upper[0]).toBeNaN(); // rank 12 of 11
   });
 
-  it('gives NaN while a slot and its neighbours hold fewer than 5 errors', () => {
+  it('gives NaN at 90 % while a slot and its neighbours hold fewer than 19 errors', () => {
     const pool = emptyPool(24, 100);
     const add = () => addResiduals(pool, [1, ...new Array(23).fill(NaN)], new Array(24).fill(0), 1);
-    for (let k = 0; k < 4; k++) add();
+    for (let k = 0; k < 18; k++) add();
     expect(band(pool, new Float64Array(24), 1, 0.9).lower[0]).toBeNaN();
     add();
     expect(band(pool, new Float64Array(24), 1, 0.9).lower[0]).toBe(1);
@@ -62,19 +79,29 @@ describe('band(pool, point, scale, coverage)', () => {
 
   it('reaches one hour either side for quarter-hour slots (±4 slots)', () => {
     const pool = emptyPool(96, 100);
-    for (let k = 0; k < 5; k++) addResiduals(pool, [1, ...new Array(95).fill(NaN)], new Array(96).fill(0), 1);
-    const { lower } = band(pool, new Float64Array(96), 1, 0.9);
+    for (let k = 0; k < 3; k++) addResiduals(pool, [1, ...new Array(95).fill(NaN)], new Array(96).fill(0), 1);
+    const { lower } = band(pool, new Float64Array(96), 1, 0.5);
     expect(lower[4]).toBe(1);
     expect(lower[92]).toBe(1);
     expect(lower[5]).toBeNaN();
     expect(lower[91]).toBeNaN();
   });
 
+  it('bands(pool, point, scale, coverages) gives each coverage the band band() gives it', () => {
+    const pool = emptyPool(24, 200);
+    const normal = gaussianSource(seedrandom('levels'));
+    for (let d = 0; d < 60; d++) addResiduals(pool, Array.from({ length: 24 }, normal), new Array(24).fill(0), 1);
+    const point = new Float64Array(24).fill(30);
+    const all = bands(pool, point, 2, [0.5, 0.9, 0.98]);
+    all.forEach((b) => expect({ lower: b.lower, upper: b.upper }).toEqual(band(pool, point, 2, b.coverage)));
+    for (let s = 0; s < 24; s++) expect(all[0].upper[s] - all[0].lower[s]).toBeLessThan(all[2].upper[s] - all[2].lower[s]);
+  });
+
   it('covers about the nominal share of new i.i.d. errors', () => {
     // common practice: empirical quantiles of exchangeable errors cover about the nominal share (split conformal, Vovk et al. 2005)
     const normal = gaussianSource(seedrandom('bands'));
     const slots = 24, zero = new Array(slots).fill(0);
-    for (const coverage of [0.8, 0.9]) {
+    for (const coverage of [0.5, 0.8, 0.9, 0.98]) {
       const pool = emptyPool(slots, 400);
       for (let d = 0; d < 400; d++) addResiduals(pool, Array.from({ length: slots }, normal), zero, 1);
       const { lower, upper } = band(pool, new Float64Array(slots), 1, coverage);

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { fromScaled } from '../../../src/engine/features/level-scale';
 import { RIDGE_LAMBDAS } from '../../../src/engine/models/learner-settings';
 import {
-  advanceMember, fitLinearEnsemble, LINEAR_WINDOWS, linearPrice, windowOf, type LinearMember, type MemberSums,
+  advanceMember, chooseLinearMembers, LINEAR_WINDOWS, refitLinearMembers, linearPrice, windowOf, type LinearMember, type MemberSums,
 } from '../../../src/engine/models/linear-ensemble';
 import { predictRidge, ridgeGram, solveRidge } from '../../../src/engine/models/ridge';
 import { fitStandardiser, type Standardiser } from '../../../src/engine/models/standardiser';
@@ -77,40 +77,65 @@ describe('advanceMember(member, sums, fresh, s)', () => {
   });
 });
 
-describe('fitLinearEnsemble(train, val, all, s, m, score)', () => {
+const noBounds = { lo: new Float64Array(m).fill(-Infinity), hi: new Float64Array(m).fill(Infinity) };
+
+describe('chooseLinearMembers(days, s, m, bounds, totalDays)', () => {
   it('fits one member on the expanding window when the history is shorter than a year', () => {
-    const all = days(80), train = all.slice(0, 60), val = all.slice(60);
-    const s = fitStandardiser(train.map((d) => d.x));
-    const { members, trainOnly, sums } = fitLinearEnsemble(train, val, all, s, m, mae(val));
-    expect(members.map((x) => x.window)).toEqual([0]);
-    expect(trainOnly).toHaveLength(1);
-    expect(sums[0].days).toHaveLength(80);
+    const all = days(80);
+    const s = fitStandardiser(all.map((d) => d.x));
+    const chosen = chooseLinearMembers(all, s, m, noBounds);
+    expect(chosen.map((x) => x.window)).toEqual([0]);
+    expectFloat32Close(chosen[0].weights, solveRidge(ridgeGram(all.map((d) => d.x), all.map((d) => d.y!), s), chosen[0].lambda));
   });
 
-  it('chooses each penalty as the one with the lowest validation score, then refits on all days', () => {
-    const all = days(420, 1.5), train = all.slice(0, 380), val = all.slice(380);
-    const s = fitStandardiser(train.map((d) => d.x));
-    const score = mae(val);
-    const { members, trainOnly, sums } = fitLinearEnsemble(train, val, all, s, m, score);
-    expect(members.map((x) => x.window)).toEqual(LINEAR_WINDOWS);
+  it('keeps a one-year member when the days it is refitted on exceed a year', () => {
+    const all = days(400), some = all.slice(0, 350);
+    const s = fitStandardiser(some.map((d) => d.x));
+    expect(chooseLinearMembers(some, s, m, noBounds).map((x) => x.window)).toEqual([0]);
+    expect(chooseLinearMembers(some, s, m, noBounds, all.length).map((x) => x.window)).toEqual(LINEAR_WINDOWS);
+    expect(refitLinearMembers(chooseLinearMembers(some, s, m, noBounds, all.length), all, s).sums[1].days).toHaveLength(364);
+  });
+
+  it('chooses the penalty with the lowest MAE over five contiguous folds, each forecast by a fit on the other days', () => {
+    const all = days(120, 1.5);
+    const s = fitStandardiser(all.map((d) => d.x));
+    // the folds by hand: days 0-23, 24-47, 48-71, 72-95, 96-119, each fitted from scratch on the rest
+    const cvError = (lambda: number) => {
+      let sum = 0;
+      for (let f = 0; f < 5; f++) {
+        const held = all.slice(24 * f, 24 * (f + 1));
+        const rest = all.filter((_, i) => i < 24 * f || i >= 24 * (f + 1));
+        const weights = solveRidge(ridgeGram(rest.map((d) => d.x), rest.map((d) => d.y!), s), lambda);
+        sum += mae(held)(held.map((d) => linearPrice([{ window: 0, lambda, weights }], s, d.x, m, d.scale))) * held.length * m;
+      }
+      return sum;
+    };
+    const errors = RIDGE_LAMBDAS.map(cvError);
+    const [member] = chooseLinearMembers(all, s, m, noBounds);
+    expect(member.lambda).toBe(RIDGE_LAMBDAS[errors.indexOf(Math.min(...errors))]);
+  });
+
+  it('picks the smallest penalty on noiseless linear data and then reproduces it closely', () => {
+    const all = days(80, 0);
+    const s = fitStandardiser(all.map((d) => d.x));
+    const members = chooseLinearMembers(all, s, m, noBounds);
+    expect(members[0].lambda).toBe(RIDGE_LAMBDAS[0]);
+    expect(mae(all)(all.map((d) => linearPrice(members, s, d.x, m, d.scale)))).toBeLessThan(0.01);
+  });
+});
+
+describe('refitLinearMembers(chosen, days, s)', () => {
+  it('fits each chosen window and penalty again on the days given, with their sums', () => {
+    const all = days(420, 1.5);
+    const s = fitStandardiser(all.map((d) => d.x));
+    const chosen = chooseLinearMembers(all.slice(0, 380), s, m, noBounds, all.length);
+    const { members, sums } = refitLinearMembers(chosen, all, s);
     members.forEach((member, k) => {
-      const part = windowOf(train, member.window);
-      const gram = ridgeGram(part.map((d) => d.x), part.map((d) => d.y!), s);
-      const scores = RIDGE_LAMBDAS.map((lambda) => score(val.map((d) => linearPrice([{ window: member.window, lambda, weights: solveRidge(gram, lambda) }], s, d.x, m, d.scale))));
-      expect(member.lambda).toBe(RIDGE_LAMBDAS[scores.indexOf(Math.min(...scores))]);
-      expect(trainOnly[k].lambda).toBe(member.lambda);
+      expect(member.lambda).toBe(chosen[k].lambda);
       const full = windowOf(all, member.window);
       expectFloat32Close(member.weights, solveRidge(ridgeGram(full.map((d) => d.x), full.map((d) => d.y!), s), member.lambda));
       expect(sums[k].days.map((d) => d.day)).toEqual(full.map((d) => d.day));
     });
-  });
-
-  it('picks the smallest penalty on noiseless linear data and then reproduces it closely', () => {
-    const all = days(80, 0), train = all.slice(0, 60), val = all.slice(60);
-    const s = fitStandardiser(train.map((d) => d.x));
-    const { members } = fitLinearEnsemble(train, val, all, s, m, mae(val));
-    expect(members[0].lambda).toBe(RIDGE_LAMBDAS[0]);
-    expect(mae(val)(val.map((d) => linearPrice(members, s, d.x, m, d.scale)))).toBeLessThan(0.01);
   });
 });
 

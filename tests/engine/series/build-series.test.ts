@@ -78,9 +78,8 @@ describe('buildSeries(table, options) with hostile header names and line breaks 
 describe('buildSeries(table, options) with a timestamp years away from the rest (found by tests/fuzz/csv-ingest)', () => {
   it('refuses a span beyond MAX_PERIODS at once, naming the rows (a row in 9999 made 7*10^7 periods and ran for minutes)', () => {
     const text = 'timestamp,price\n2025-01-01T00:00Z,1\n2025-01-01T01:00Z,2\n2025-01-01T02:00Z,2\n9999-01-01T02:00Z,2\n';
-    const started = Date.now();
+    // how fast it refuses is measured in npm run bench (bench/engine-speed.ts), not asserted here
     expect(() => build(text)).toThrow(/span \d+ periods of 60 minutes, from row 2 to row 5/);
-    expect(Date.now() - started).toBeLessThan(2000);
   });
 
   it('still reads a long span with gaps below the limit', () => {

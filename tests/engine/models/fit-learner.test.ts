@@ -1,0 +1,49 @@
+import { describe, expect, it } from 'vitest';
+import { createModel, inputFrame, type Learner, type ModelOptions, type Series } from '../../../src/engine';
+import { trainingBlocks } from '../../../src/engine/models/blocks';
+import { syntheticSeries } from '../../support/synthetic';
+
+const SMALL: ModelOptions = { seed: 4, network: { hiddenLayers: [6], learningRate: 0.05, momentum: 0.5, iterations: 15, ensemble: 2, checkEvery: 5, patience: 2 } };
+const series = syntheticSeries(160);
+
+function fitted(kind: string, s: Series): Learner {
+  const model = createModel(kind, SMALL) as Learner;
+  model.fit(inputFrame(s));
+  return model;
+}
+
+/** The series with every price of the last `days` local delivery days changed. */
+function newestDaysChanged(s: Series, days: number): Series {
+  const frame = inputFrame(s);
+  const cut = days === 0 ? s.times.length : frame.days[frame.days.length - days].start;
+  return { ...s, price: s.price.map((p, i) => (i >= cut ? p * 1.3 + 7 : p)) };
+}
+
+describe('fitLearner: the holdout block takes part in no choice', () => {
+  it.each(['linear', 'blend'])('%s: changing the holdout days\' prices leaves every choice and the tuning score as they were', (kind) => {
+    const a = fitted(kind, series).state!;
+    const holdout = a.holdout.days;
+    expect(holdout).toBe(trainingBlocks(160 - 56).holdout);
+    const b = fitted(kind, newestDaysChanged(series, holdout)).state!;
+    expect(b.linear.map((l) => l.lambda)).toEqual(a.linear.map((l) => l.lambda));
+    expect(b.neuralWeight).toBe(a.neuralWeight);
+    expect(b.tuning).toEqual(a.tuning);
+    // and the change does reach what is scored on the holdout, so the check can fail
+    expect(b.holdout.mae).not.toBe(a.holdout.mae);
+  });
+
+  it('bands start from the holdout errors: one per holdout day and slot, in units of the day\'s level scale', () => {
+    const state = fitted('linear', series).state!;
+    for (const slot of state.residuals.bySlot) expect(slot).toHaveLength(state.holdout.days);
+    const b = fitted('linear', newestDaysChanged(series, state.holdout.days)).state!;
+    expect(b.residuals.bySlot[0]).not.toEqual(state.residuals.bySlot[0]);
+    const c = fitted('linear', newestDaysChanged(series, 0)).state!;
+    expect(c.residuals).toEqual(state.residuals);
+  });
+
+  it('scores the tuning block in-sample for its choices: the chosen penalties are the best there', () => {
+    const state = fitted('linear', series).state!;
+    expect(state.tuning.mae).toBeLessThanOrEqual(state.tuning.maeNaiveWeek);
+    expect(state.tuning.days).toBe(trainingBlocks(160 - 56).tuning);
+  });
+});
