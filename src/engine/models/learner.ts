@@ -1,5 +1,6 @@
 import { InputError } from '../errors';
 import { historyNeeded } from '../features/day-features';
+import type { LevelScale } from '../features/level-scale';
 import { targetDay, type DayFrame } from '../series/day-frame';
 import { addResiduals, bands, REPORTED_COVERAGES } from './bands';
 import { mix } from './blend-weights';
@@ -158,7 +159,17 @@ export class Learner implements DayAheadModel {
     for (const day of this.issued.keys()) if (day < d) this.issued.delete(day);
   }
 
-  private pointForecast(x: Float64Array, scale: { centre: number; scale: number }): Float64Array {
+  /** The feature vector and level scale of day `d` of `view` (undefined when an input is unknown). */
+  featuresOf(view: DayFrame, d: number): { x: Float64Array; scale: LevelScale } | undefined {
+    return this.featureCache().features(view, d);
+  }
+
+  /** The point forecast (per clock slot) for a feature vector on a level scale, without any input checks. */
+  forecastFromFeatures(x: Float64Array, scale: LevelScale): Float64Array {
+    return this.pointForecast(x, scale);
+  }
+
+  private pointForecast(x: Float64Array, scale: LevelScale): Float64Array {
     const state = this.fitted();
     const m = state.targetRange.lo.length;
     // held inside the (widened) range of scaled prices seen in training
