@@ -68,3 +68,14 @@ export * from './model-file/model-schema';
 export * from './model-file/save-model';
 export * from './model-file/load-model';
 export * from './models/forecast-ahead';
+
+export * from './features/group-columns';
+export * from './explain/grouped-model';
+export * from './explain/shapley';
+export * from './explain/contributions';
+export * from './explain/learner-model';
+export * from './explain/grouped-model-of';
+export * from './explain/ahead-day';
+export * from './explain/explain-ahead';
+export * from './explain/what-if';
+export * from './explain/sensitivity';

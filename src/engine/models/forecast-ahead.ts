@@ -65,7 +65,7 @@ export function forecastAhead(model: DayAheadModel, series: Series, drivers: str
 }
 
 /** The series with empty rows for the local day after its last period's day (for models without drivers). */
-function withNextDay(series: Series): Series {
+export function withNextDay(series: Series): Series {
   const step = series.resolution * 60_000;
   let lastPrice = series.price.length - 1;
   while (lastPrice >= 0 && Number.isNaN(series.price[lastPrice])) lastPrice--;
