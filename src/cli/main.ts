@@ -2,6 +2,7 @@ import { Command, CommanderError, Option } from 'commander';
 import { InputError } from '../engine';
 import { backtestCommand } from './commands/backtest';
 import { demoCommand } from './commands/demo';
+import { explainCommand } from './commands/explain';
 import { forecastCommand } from './commands/forecast';
 import { scoreCommand } from './commands/score';
 import { trainCommand } from './commands/train';
@@ -57,6 +58,18 @@ export async function main(argv: string[]): Promise<number> {
     .option('--out <file>', 'write timestamp,forecast,lower,upper')
     .option('--json', 'print the forecast as JSON on stdout')
     .action(async (o) => forecastCommand(o));
+
+  program.command('explain')
+    .description('split the change of the next day\'s mean forecast against the model\'s forecast of D-1 or D-7 into one contribution per input group')
+    .requiredOption('--model <file>', 'model file saved by train')
+    .requiredOption('--input <file>', 'CSV: history with prices (then, without --drivers, the forecast day\'s rows with drivers and an empty price)')
+    .option('--drivers <file>', 'CSV with the forecast day\'s driver rows: timestamp and the history\'s driver columns, no price')
+    .addOption(new Option('--against <day>', 'reference day: d-1 (the day before) or d-7 (a week before)').choices(['d-1', 'd-7']).default('d-1'))
+    .option('--tz <zone>', 'market time zone (IANA); must be the model\'s, which is used when left out')
+    .addOption(delimiter()).addOption(decimal())
+    .option('--sensitivity', 'also print the forecast change per unit of each driver')
+    .option('--json', 'print the explanation as JSON on stdout')
+    .action(async (o) => explainCommand(o));
 
   program.command('score')
     .description('grade forecast columns against the actual prices')
