@@ -9,6 +9,7 @@ import { baseline as baselineCore } from './baseline';
 import { guarded } from './cell-error';
 import { textArg } from './cells';
 import { compare as compareCore } from './compare';
+import { explain as explainCore } from './explain';
 import { holiday as holidayCore } from './holiday';
 import { modelFacts } from './model-facts';
 import { score as scoreCore } from './score';
@@ -117,6 +118,24 @@ export async function holiday(date: any, region: string): Promise<string> {
  */
 export async function model(model: string, field?: string): Promise<any[][]> {
   return guarded(async () => modelFacts((await storedModel(model)).stored, field));
+}
+
+/**
+ * Why the next delivery day's mean forecast differs from the model's forecast of a reference day: spills two columns, input group and its contribution (largest first); the rows add up to the change.
+ * @customfunction EXPLAIN
+ * @param model Name of a model saved in this workbook (blend, neural or linear).
+ * @param times Start time of each period (as for LOOM.AHEAD).
+ * @param prices Price of each period; empty where unknown (tomorrow's rows).
+ * @param [driverTimes] Start times of the driver rows, when the drivers are not on the rows of times.
+ * @param [drivers] Driver forecasts the model was trained with.
+ * @param [against] Reference day: "d-1" (the day before; the default) or "d-7" (the same weekday a week before).
+ * @returns Two columns: input group and contribution in price units, one row per group.
+ */
+export async function explain(model: string, times: any[][], prices: any[][], driverTimes?: any[][], drivers?: any[][], against?: string): Promise<any[][]> {
+  return guarded(async () => {
+    const { stored, dateSystem } = await storedModel(model);
+    return explainCore(stored, { times, prices, driverTimes, drivers }, against, { dateSystem });
+  });
 }
 
 // ---- the workbook behind the functions -------------------------------------------

@@ -1,4 +1,4 @@
-import { ahead, band, baseline, compare, holiday, model, score } from '../functions/functions';
+import { ahead, band, baseline, compare, explain, holiday, model, score } from '../functions/functions';
 
 /**
  * The LOOM cell functions as the preview grid calls them: the very
@@ -29,4 +29,5 @@ export const LOOM_FUNCTIONS: Record<string, LoomFunction> = {
   COMPARE: { call: compare, params: ['matrix', 'matrix', 'matrix', 'scalar', 'matrix'], required: 3 },
   HOLIDAY: { call: holiday, params: ['scalar', 'scalar'], required: 2 },
   MODEL: { call: model, params: ['scalar', 'scalar'], required: 1, readsModels: true },
+  EXPLAIN: { call: explain, params: ['scalar', 'matrix', 'matrix', 'matrix', 'matrix', 'scalar'], required: 3, readsModels: true },
 };

@@ -85,7 +85,7 @@ describe('the build (webpack.config.js)', () => {
 
   it('functions.json lists the seven LOOM functions', () => {
     const meta = JSON.parse(readFileSync(join(out, 'functions.json'), 'utf8'));
-    expect(meta.functions.map((f: { id: string }) => f.id).sort()).toEqual(['AHEAD', 'BAND', 'BASELINE', 'COMPARE', 'HOLIDAY', 'MODEL', 'SCORE']);
+    expect(meta.functions.map((f: { id: string }) => f.id).sort()).toEqual(['AHEAD', 'BAND', 'BASELINE', 'COMPARE', 'EXPLAIN', 'HOLIDAY', 'MODEL', 'SCORE']);
   });
 
   it('wraps no module in eval() and leaves gpu.js out', () => {
@@ -116,7 +116,7 @@ describe('the build (webpack.config.js)', () => {
     const html = readFileSync(join(out, 'taskpane.html'), 'utf8');
     const scripts = [...html.matchAll(/<script[^>]*src="?([^"\s>]+)"?/g)].map((m) => m[1]).filter((s) => !s.startsWith('office-js/') && s !== 'taskpane.js');
     for (const s of scripts) vm.runInContext(readFileSync(join(out, s), 'utf8'), context, { filename: s });
-    expect([...associated.keys()].sort()).toEqual(['AHEAD', 'BAND', 'BASELINE', 'COMPARE', 'HOLIDAY', 'MODEL', 'SCORE']);
+    expect([...associated.keys()].sort()).toEqual(['AHEAD', 'BAND', 'BASELINE', 'COMPARE', 'EXPLAIN', 'HOLIDAY', 'MODEL', 'SCORE']);
 
     expect(await associated.get('HOLIDAY')!(45933, 'DE')).toBe('Tag der Deutschen Einheit');
     expect(await associated.get('SCORE')!([[10], [20]], [[12], [17]], null, null)).toBe(2.5);

@@ -23,8 +23,8 @@ beforeAll(async () => {
 const params = (id: string) => functions.find((f) => f.id === id)!.parameters.map((p) => (p.optional ? `[${p.name}]` : p.name));
 
 describe('functions.json', () => {
-  it('lists the seven LOOM functions of design.md', () => {
-    expect(functions.map((f) => f.id).sort()).toEqual(['AHEAD', 'BAND', 'BASELINE', 'COMPARE', 'HOLIDAY', 'MODEL', 'SCORE']);
+  it('lists the eight LOOM functions of design.md', () => {
+    expect(functions.map((f) => f.id).sort()).toEqual(['AHEAD', 'BAND', 'BASELINE', 'COMPARE', 'EXPLAIN', 'HOLIDAY', 'MODEL', 'SCORE']);
   });
 
   it('gives each function the parameters of the design.md table', () => {
@@ -35,6 +35,7 @@ describe('functions.json', () => {
     expect(params('COMPARE')).toEqual(['actual', 'forecastA', 'forecastB', '[loss]', '[days]']);
     expect(params('HOLIDAY')).toEqual(['date', 'region']);
     expect(params('MODEL')).toEqual(['model', '[field]']);
+    expect(params('EXPLAIN')).toEqual(['model', 'times', 'prices', '[driverTimes]', '[drivers]', '[against]']);
   });
 
   it('has help text for every function and every parameter', () => {
@@ -52,9 +53,9 @@ describe('functions.json', () => {
     }
   });
 
-  it('spills matrices from AHEAD, BAND, BASELINE and MODEL; SCORE and COMPARE give a number, HOLIDAY text', () => {
+  it('spills matrices from AHEAD, BAND, BASELINE, MODEL and EXPLAIN; SCORE and COMPARE give a number, HOLIDAY text', () => {
     const result = (id: string) => functions.find((f) => f.id === id)!.result;
-    for (const id of ['AHEAD', 'BAND', 'BASELINE', 'MODEL']) expect(result(id).dimensionality, id).toBe('matrix');
+    for (const id of ['AHEAD', 'BAND', 'BASELINE', 'MODEL', 'EXPLAIN']) expect(result(id).dimensionality, id).toBe('matrix');
     expect(result('SCORE').type).toBe('number');
     expect(result('COMPARE').type).toBe('number');
     expect(result('HOLIDAY').type).toBe('string');
@@ -62,6 +63,6 @@ describe('functions.json', () => {
 
   it('associates each id with a function functions.ts exports', () => {
     for (const a of associate) expect(typeof (loom as Record<string, unknown>)[a.functionName], a.id).toBe('function');
-    expect(associate).toHaveLength(7);
+    expect(associate).toHaveLength(8);
   });
 });
