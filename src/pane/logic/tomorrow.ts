@@ -11,6 +11,18 @@ import type { DataCheck } from './read-ranges';
  *   a driver it was trained with), or tomorrow's driver rows are missing
  */
 export function forecastTomorrow(stored: StoredModel, data: Pick<DataCheck, 'series'>): { rows: ForecastRow[]; days: string[] } {
+  checkModelFits(stored, data);
+  const learner = learnerFromStored(stored, `model "${stored.name}"`);
+  return forecastAhead(learner, data.series, stored.setup.drivers);
+}
+
+/**
+ * Refuses a model that does not fit the checked data: another zone or
+ * resolution, or a driver it was trained with that the data lacks.
+ *
+ * @throws InputError naming what to change
+ */
+export function checkModelFits(stored: StoredModel, data: Pick<DataCheck, 'series'>): void {
   const { series } = data;
   if (stored.zone !== series.zone) {
     throw new InputError(`model "${stored.name}" was trained for time zone ${stored.zone}, but Data uses ${series.zone}; set the market time zone to ${stored.zone}`);
@@ -22,8 +34,6 @@ export function forecastTomorrow(stored: StoredModel, data: Pick<DataCheck, 'ser
   if (missing.length) {
     throw new InputError(`model "${stored.name}" was trained with the driver "${missing[0]}", which the picked driver ranges do not have (found: ${Object.keys(series.drivers).join(', ') || 'none'})`);
   }
-  const learner = learnerFromStored(stored, `model "${stored.name}"`);
-  return forecastAhead(learner, series, stored.setup.drivers);
 }
 
 /** The rows of one local delivery day (`YYYY-MM-DD` in `zone`). */

@@ -6,10 +6,12 @@ import { readArchive } from '../logic/archive';
 import { gradeArchive, gradeSummary, LATE_MEANING, type ArchiveGrade } from '../logic/grade-archive';
 import { jobProgress } from './job-progress';
 import { modelPicker } from './model-picker';
+import { whyView } from './why-view';
 
 /**
  * Check: how the picked model would have done over a recent span, walked
  * forward day by day, against the naive-week and weekday-rule baselines;
+ * why tomorrow's forecast moves against a reference day (why-view.ts);
  * and how the issued forecasts in the archive did against actual prices.
  */
 export function checkSection(ctx: PaneContext): HTMLElement {
@@ -74,6 +76,7 @@ export function checkSection(ctx: PaneContext): HTMLElement {
     message.el,
     table,
     chartBox,
+    whyView(ctx, picker),
     h('h3', { text: 'Issued forecasts' }),
     h('p', { class: 'loom-help', text: `Grades what was issued (the sheet "Forecast archive") against the prices now in Data: for each period, the last forecast issued before its delivery day began. ${LATE_MEANING[0].toUpperCase()}${LATE_MEANING.slice(1)}; a period whose price is not in Data yet is waiting.` }),
     h('div', { class: 'loom-actions loom-actions-message' }, grade, gradeMessage.el),
