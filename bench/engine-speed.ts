@@ -1,7 +1,10 @@
 // npm run bench (first part): how fast the engine's plumbing is. These were
 // once timed tests, which flake on a busy machine; here they are measured and
 // printed, not asserted. Each line: what, median of the runs, milliseconds.
-import { addDays, buildSeries, DEMO_MARKET, generateMarket, holidayName, parseCsv } from '../src/engine';
+import {
+  addDays, buildSeries, createModel, dayContributions, DEMO_MARKET, explainAhead, frameBefore, generateMarket, groupedModelOf, holidayName, inputFrame, parseCsv, toCsv,
+  type Learner,
+} from '../src/engine';
 
 function median(times: number[]): number {
   const s = [...times].sort((a, b) => a - b);
@@ -42,5 +45,36 @@ const results = [
     const text = parts.join('\r\n');
     return time('read a CSV of 10^6 quarter-hours', 1, () => buildSeries(parseCsv(text, 'big.csv'), { zone: 'Europe/Berlin' }));
   })(),
+  ...explainTimes(),
 ];
 console.log(JSON.stringify({ engineSpeed: results }));
+
+/**
+ * The explanation of one day on the demo market (hourly, default feature
+ * groups and network layout; few epochs, as training speed is not what is
+ * measured): the 2^G forward passes alone, and the whole explainAhead
+ * (which also forecasts the day once through predict). Goal: 200 ms.
+ */
+function explainTimes(): { what: string; ms: number }[] {
+  const rows = generateMarket(DEMO_MARKET, 1);
+  const { series } = buildSeries(parseCsv(toCsv(rows), 'demo.csv'), { zone: DEMO_MARKET.zone });
+  const lastDay = rows.findIndex((r) => r.timestamp.startsWith(DEMO_MARKET.end));
+  const open = { ...series, price: series.price.map((p, i) => (i >= lastDay ? NaN : p)) };
+  const frame = inputFrame(open);
+  const d = frame.price.length;
+  const drivers = Object.keys(series.drivers);
+  return (['linear', 'blend'] as const).flatMap((kind) => {
+    const model = createModel(kind, { region: DEMO_MARKET.region, network: { ...createModelDefaults(), iterations: 5 } }) as Learner;
+    model.fit(frameBefore(frame, d));
+    const grouped = groupedModelOf(model);
+    const players = grouped.groups.length;
+    return [
+      time(`explain one day, ${kind} hourly: ${2 ** players} forward passes (${players} groups)`, 5, () => dayContributions(grouped, frame, d, d - 1)),
+      time(`explainAhead one day, ${kind} hourly (with its forecast)`, 5, () => explainAhead(model, open, drivers, 'd-1')),
+    ];
+  });
+}
+
+function createModelDefaults() {
+  return (createModel('blend') as Learner).settings.network;
+}

@@ -4,6 +4,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { compareForecasts, mae, parseStoredModel, rmse, toCsv, type DemoRow } from '../../src/engine';
 import { ahead } from '../../src/functions/ahead';
+import { explain } from '../../src/functions/explain';
 import type { CellValue } from '../../src/host/workbook-port';
 import { demoWorkbook, MODEL_NAME } from '../../src/preview/demo-workbook';
 import { launchChromium, type LaunchedBrowser } from './support/browser';
@@ -86,6 +87,26 @@ async function message(test: string): Promise<{ kind: string | null; text: strin
 async function outcome(test: string, timeout = 180_000): Promise<{ kind: string | null; text: string }> {
   await page.waitForSelector(`[data-test="${test}"][data-kind="ok"], [data-test="${test}"][data-kind="error"]`, { timeout });
   return message(test);
+}
+
+/** Data checked and a model trained, as the tests before do; for running the why test alone (-t why). */
+async function ensureModel(): Promise<void> {
+  if (await page.locator('[data-test="data-message"][data-kind="ok"]').count() === 0) {
+    await page.click('[data-test="tab-data"]');
+    await page.fill('[data-test="times-address"]', `History!A1:A${lastRow}`);
+    await page.fill('[data-test="prices-address"]', `History!B1:B${lastRow}`);
+    await page.fill('[data-test="drivers-address"]', `History!C1:D${lastRow}`);
+    await page.click('[data-test="check-data-button"]');
+    expect((await outcome('data-message')).kind).toBe('ok');
+  }
+  if ((await pv.models()).length === 0) {
+    await page.click('[data-test="tab-train"]');
+    await page.fill('[data-test="iterations"]', '20');
+    await page.fill('[data-test="ensemble"]', '2');
+    await page.click('[data-test="train-button"]');
+    expect((await outcome('train-message')).kind).toBe('ok');
+  }
+  await pv.settled();
 }
 
 beforeAll(async () => {
@@ -255,6 +276,53 @@ describe('the standalone preview in a real browser', () => {
     const models = await page.locator('[data-test="backtest-table"] tbody tr').evaluateAll((rows) => rows.map((r) => r.getAttribute('data-model')));
     expect(models).toContain('naive-week');
     await shot('05-check');
+  });
+
+  it('Check: the why view shows tomorrow\'s contributions as bars; a what-if moves the forecast and the bars; nothing is written until the table is placed', async () => {
+    await ensureModel();
+    await page.click('[data-test="tab-check"]');
+    const before = await pv.fingerprint();
+    await page.selectOption('[data-test="why-against"]', 'd-1');
+    await page.click('[data-test="why-button"]');
+    expect((await outcome('why-message')).kind).toBe('ok');
+    const bars = () => page.locator('[data-test="why-chart"] g[data-group]').evaluateAll((els) => els.map((e) => [e.getAttribute('data-group')!, Number(e.getAttribute('data-value'))] as [string, number]));
+    const shownBars = await bars();
+    // the same numbers as LOOM.EXPLAIN's engine in Node on the same ranges
+    const stored = parseStoredModel((await pv.storedModels())[MODEL_NAME]);
+    const times = historyColumn(0, 2, lastRow), prices = historyColumn(1, 2, lastRow);
+    const drivers = history.slice(1, lastRow).map((r) => [r[2], r[3]]);
+    const expected = explain(stored, { times, prices, driverTimes: times, drivers }, 'd-1');
+    expect(shownBars.map((b) => b[0])).toEqual(expected.map((r) => r[0]));
+    shownBars.forEach(([, v], i) => expect(v).toBeCloseTo(expected[i][1] as number, 9));
+    const summary = page.locator('[data-test="why-summary"]');
+    const base = Number(await summary.getAttribute('data-forecast-mean'));
+    expect(await summary.getAttribute('data-day')).toBe(demo.tomorrow);
+    await shot('05b-why');
+
+    // what-if: tomorrow's load forecast +10 % (common practice: more load raises the price)
+    await page.selectOption('[data-test="why-driver"]', 'load_forecast');
+    await page.fill('[data-test="why-amount"]', '10');
+    await page.click('[data-test="why-button"]');
+    await page.waitForFunction((b) => Number(document.querySelector('[data-test="why-summary"]')?.getAttribute('data-forecast-mean')) !== b, base);
+    const moved = Number(await summary.getAttribute('data-forecast-mean'));
+    expect(moved).toBeGreaterThan(base);
+    expect(Number(await summary.getAttribute('data-base-mean'))).toBe(base);
+    expect(await bars()).not.toEqual(shownBars);
+    await shot('05c-why-what-if');
+    await pv.settled();
+    expect(await pv.fingerprint()).toBe(before);
+
+    // placed only when asked, through the one write path
+    await page.fill('[data-test="why-address"]', 'Forecast!T1');
+    await page.click('[data-test="why-place"]');
+    expect((await outcome('why-message')).kind).toBe('ok');
+    await pv.settled();
+    expect(await pv.fingerprint()).not.toBe(before);
+    const placed = await pv.readRange('Forecast!T1:U30');
+    expect(String(placed[0][0])).toBe(`why ${demo.tomorrow} moves (model ${MODEL_NAME}, against d-1)`);
+    const sumRow = placed.find((r) => r[0] === 'sum (change of the mean)')!;
+    const referenceMean = placed.find((r) => String(r[0]).endsWith('model\'s forecast mean'))![1] as number;
+    expect(sumRow[1] as number).toBeCloseTo(moved - referenceMean, 9);
   });
 
   it('Place: asks before writing over a non-empty range; no writes nothing, yes writes the formula block', async () => {
