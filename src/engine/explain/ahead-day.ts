@@ -1,18 +1,17 @@
-import { InputError } from '../errors';
-import { forecastAhead, withNextDay } from '../models/forecast-ahead';
+import { nextDayFrame } from '../models/forecast-ahead';
 import type { DayAheadModel } from '../models/model';
-import { dayFrame, type DayFrame } from '../series/day-frame';
-import { inputFrame } from '../series/input-frame';
+import { frameBefore, type DayFrame } from '../series/day-frame';
+import { dayMatrix } from '../series/day-matrix';
 import type { Series } from '../series/series';
 
 /** The day an explanation is about, as `forecast` would forecast it. */
 export interface AheadDay {
   /** the frame the model reads (inputFrame: unknown values filled from earlier days) */
   frame: DayFrame;
-  /** the same days unfilled, for actual prices */
-  raw: DayFrame;
   /** index of the next delivery day after the last known price */
   d: number;
+  /** the known prices of day `k` on its clock slots, unfilled (NaN where unknown) */
+  actual(k: number): Float64Array;
 }
 
 /**
@@ -24,10 +23,7 @@ export interface AheadDay {
  * @throws InputError when the next day cannot be forecast
  */
 export function aheadDay(model: DayAheadModel, series: Series, drivers: string[]): AheadDay {
-  const { days } = forecastAhead(model, series, drivers);
-  const full = drivers.length === 0 ? withNextDay(series) : series;
-  const frame = inputFrame(full);
-  const d = frame.price.length;
-  if (frame.days[d]?.date !== days[0]) throw new InputError(`cannot find the delivery day ${days[0]} in the data`);
-  return { frame, raw: dayFrame(full), d };
+  const { full, frame, first } = nextDayFrame(series, drivers);
+  model.predict(frameBefore(frame, first));
+  return { frame, d: first, actual: (k) => dayMatrix(full.price, [frame.days[k]], frame.slots)[0] };
 }

@@ -53,7 +53,7 @@ export interface Explanation {
 export function explainAhead(model: DayAheadModel, series: Series, drivers: string[], against: ReferenceChoice = 'd-1'): Explanation {
   if (!(REFERENCE_CHOICES as readonly string[]).includes(against)) throw new InputError(`against must be d-1 or d-7, got "${against}"`);
   const grouped = groupedModelOf(model);
-  const { frame, raw, d } = aheadDay(model, series, drivers);
+  const { frame, d, actual: actualOf } = aheadDay(model, series, drivers);
   const r = d - (against === 'd-7' ? 7 : 1);
   const day = frame.days[d].date;
   const referenceDay = addDays(day, against === 'd-7' ? -7 : -1);
@@ -61,7 +61,7 @@ export function explainAhead(model: DayAheadModel, series: Series, drivers: stri
   if (!found) {
     throw new InputError(`cannot explain ${day} against ${referenceDay}: the reference day has too little price history before it to be forecast itself; give a longer history or compare with d-1`);
   }
-  const actual = Array.from(raw.price[r] ?? []).filter((v) => !Number.isNaN(v));
+  const actual = Array.from(actualOf(r)).filter((v) => !Number.isNaN(v));
   const forecastMean = mean(found.forecast);
   const referenceForecastMean = mean(found.reference);
   const referenceActualMean = actual.length ? mean(actual) : NaN;

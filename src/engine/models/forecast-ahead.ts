@@ -1,5 +1,5 @@
 import { InputError } from '../errors';
-import { frameBefore } from '../series/day-frame';
+import { frameBefore, type DayFrame } from '../series/day-frame';
 import { expandDay } from '../series/day-matrix';
 import { inputFrame } from '../series/input-frame';
 import { addDays } from '../calendar/weekday';
@@ -24,26 +24,13 @@ export interface AheadRow {
  * @throws InputError when the next day's driver rows are missing
  */
 export function forecastAhead(model: DayAheadModel, series: Series, drivers: string[]): { rows: AheadRow[]; days: string[]; notes: string[] } {
-  const full = drivers.length === 0 ? withNextDay(series) : series;
-  const frame = inputFrame(full);
-  const first = frame.price.length;
-  if (first === 0) throw new InputError('there is no known price to forecast from');
+  const { full, frame, first, given } = nextDayFrame(series, drivers);
   const lastKnown = frame.days[first - 1].date;
   const notes: string[] = [];
   const lastDay = frame.days[first - 1];
   const known = full.price.slice(lastDay.start, lastDay.start + lastDay.count).filter((p) => !Number.isNaN(p)).length;
   if (known < lastDay.expected) {
     notes.push(`${lastKnown}, the last day with prices, has ${known} of ${lastDay.expected}; its other periods take the same period of the day before`);
-  }
-  // judge the drivers on the raw rows: the input frame fills unknown values from earlier days
-  const given = (d: number) => drivers.every((n) => {
-    const day = frame.days[d];
-    return n in full.drivers && full.drivers[n].slice(day.start, day.start + day.count).some((v) => !Number.isNaN(v));
-  });
-  if (first >= frame.days.length || !given(first)) {
-    throw new InputError(
-      `the forecast for ${addDays(lastKnown, 1)} needs its rows: timestamps of that day with ${drivers.join(', ')} filled in and price left empty`,
-    );
   }
   const rows: AheadRow[] = [];
   const days: string[] = [];
@@ -62,6 +49,31 @@ export function forecastAhead(model: DayAheadModel, series: Series, drivers: str
   }
   if (days.length > 1) notes.push(`${days.slice(1).join(', ')} use the forecasts of the days before them as their price history`);
   return { rows, days, notes };
+}
+
+/**
+ * The frame a forecast of the next day reads, with the index `first` of
+ * that day (the day after the last known price) and a test of whether a day
+ * has the driver rows it needs, judged on the raw rows (the input frame
+ * fills unknown values from earlier days).
+ *
+ * @throws InputError when there is no price, or the next day's driver rows are missing
+ */
+export function nextDayFrame(series: Series, drivers: string[]): { full: Series; frame: DayFrame; first: number; given: (d: number) => boolean } {
+  const full = drivers.length === 0 ? withNextDay(series) : series;
+  const frame = inputFrame(full);
+  const first = frame.price.length;
+  if (first === 0) throw new InputError('there is no known price to forecast from');
+  const given = (d: number) => drivers.every((n) => {
+    const day = frame.days[d];
+    return n in full.drivers && full.drivers[n].slice(day.start, day.start + day.count).some((v) => !Number.isNaN(v));
+  });
+  if (first >= frame.days.length || !given(first)) {
+    throw new InputError(
+      `the forecast for ${addDays(frame.days[first - 1].date, 1)} needs its rows: timestamps of that day with ${drivers.join(', ')} filled in and price left empty`,
+    );
+  }
+  return { full, frame, first, given };
 }
 
 /** The series with empty rows for the local day after its last period's day (for models without drivers). */
