@@ -20,6 +20,14 @@ function morningCommands(): string[] {
   return block.split('\n').map((l) => l.replace(/#.*$/, '').trim()).filter((l) => l.length > 0);
 }
 
+/** The command of "Why tomorrow moves" and the output printed under it. */
+function whyBlocks(): { command: string; printed: string } {
+  const readme = readFileSync(join(ROOT, 'README.md'), 'utf8');
+  const section = readme.slice(readme.indexOf('## Why tomorrow moves'));
+  const [command, printed] = [...section.matchAll(/```\n([\s\S]*?)```/g)].slice(0, 2).map((m) => m[1]);
+  return { command: command.trim(), printed };
+}
+
 describe("the README's morning", () => {
   const commands = morningCommands();
 
@@ -47,5 +55,11 @@ describe("the README's morning", () => {
     expect(outputs[2].stderr).toMatch(/2026-11-30 is already past/);
     expect(outputs[3].stdout).toMatch(/^forecast\s+\d+\.\d{3}/m);
     expect(outputs[3].stdout).toMatch(/band lower\.\.upper: \d+ of 24 actual prices inside/);
+    // "Why tomorrow moves": its explain command, on the same files, prints what the README shows
+    const why = whyBlocks();
+    expect(why.command).toMatch(/^npx spotloom explain /);
+    const r = spawnSync(process.execPath, [BIN, ...why.command.split(/\s+/).slice(2)], { cwd: dir, encoding: 'utf8', timeout: 600_000 });
+    expect(r.status, r.stderr.slice(-2000)).toBe(0);
+    expect(r.stdout).toBe(why.printed);
   }, 900_000);
 });
