@@ -4,6 +4,7 @@ import { ahead } from '../../src/functions/ahead';
 import { band } from '../../src/functions/band';
 import { baseline } from '../../src/functions/baseline';
 import { compare } from '../../src/functions/compare';
+import { explain } from '../../src/functions/explain';
 import { holiday } from '../../src/functions/holiday';
 import { modelFacts, MODEL_FIELDS } from '../../src/functions/model-facts';
 import { score } from '../../src/functions/score';
@@ -106,6 +107,18 @@ describe('LOOM.AHEAD, LOOM.BAND and LOOM.MODEL with a stored model', () => {
         for (const [lo, hi] of b.value) expect(lo).toBeLessThanOrEqual(hi);
       }
     }), params(25, 86));
+  });
+
+  it('explain on valid ranges with a few cells damaged spills group names with finite contributions, or gives an InputError', () => {
+    const { market, stored } = fixture();
+    fc.assert(fc.property(damaged, fc.oneof(fc.constantFrom(null, 'd-1', 'd-7', 'D-7', 'd-2'), cell), ({ damage, cut, as }, against) => {
+      const t = oneTable(market, as);
+      const ranges: Record<string, unknown[][]> = { times: t.times.map((r) => [...r]), prices: t.prices.map((r) => [...r]), drivers: t.drivers.map((r) => [...r]) };
+      for (const [at, which, v] of damage) ranges[which][at % ranges[which].length][0] = v;
+      if (cut !== null) for (const k of Object.keys(ranges)) ranges[k] = ranges[k].slice(0, ranges[k].length - cut);
+      const got = outcome(() => explain(stored, { times: ranges.times, prices: ranges.prices, drivers: ranges.drivers }, against));
+      if (got.ok) for (const [group, value] of got.value) { expect(typeof group).toBe('string'); expect(Number.isFinite(value)).toBe(true); }
+    }), params(15, 89));
   });
 
   it('ahead and band on random ranges give an InputError, not a fault', () => {

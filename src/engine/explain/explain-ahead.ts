@@ -1,6 +1,7 @@
 import { addDays } from '../calendar/weekday';
 import { InputError } from '../errors';
 import type { DayAheadModel } from '../models/model';
+import { frameBefore } from '../series/day-frame';
 import type { Series } from '../series/series';
 import { aheadDay } from './ahead-day';
 import { dayContributions, mean } from './contributions';
@@ -57,9 +58,14 @@ export function explainAhead(model: DayAheadModel, series: Series, drivers: stri
   const r = d - (against === 'd-7' ? 7 : 1);
   const day = frame.days[d].date;
   const referenceDay = addDays(day, against === 'd-7' ? -7 : -1);
+  // the reference day's inputs pass the same checks as a forecast's (a mistyped driver there would skew every contribution)
+  if (r >= 0 && grouped.inputsOf(frame, r)) model.predict(frameBefore(frame, r));
   const found = r >= 0 ? dayContributions(grouped, frame, d, r) : undefined;
   if (!found) {
     throw new InputError(`cannot explain ${day} against ${referenceDay}: the reference day has too little price history before it to be forecast itself; give a longer history or compare with d-1`);
+  }
+  if (![...found.forecast, ...found.reference, ...found.contributions].every(Number.isFinite)) {
+    throw new InputError(`cannot explain ${day} against ${referenceDay}: the model's forecast of a mix of the two days' inputs is not a finite number; check the inputs of both days`);
   }
   const actual = Array.from(actualOf(r)).filter((v) => !Number.isNaN(v));
   const forecastMean = mean(found.forecast);

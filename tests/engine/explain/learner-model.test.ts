@@ -50,4 +50,12 @@ describe('groupedModelOf(model)', () => {
     expect(() => explainAhead(learner, short, ['load_forecast'], 'd-7')).toThrow(/too little price history/);
     expect(() => explainAhead(learner, series, ['load_forecast'], 'd-3' as never)).toThrow(/against must be d-1 or d-7/);
   });
+
+  it('explainAhead checks the reference day\'s inputs as a forecast would: a mistyped driver there is refused', () => {
+    const { learner, series } = trained('linear');
+    const today = inputFrame(series).days[HISTORY_DAYS - 1];
+    const load = [...series.drivers.load_forecast];
+    load[today.start + 3] = 1e6;
+    expect(() => explainAhead(learner, { ...series, drivers: { load_forecast: load } }, ['load_forecast'])).toThrow(/driver "load_forecast" is 1000000 in slot 4, more than 20 standard deviations/);
+  });
 });
