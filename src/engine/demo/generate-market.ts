@@ -7,7 +7,7 @@ import { dayPeriods } from './day-periods';
 import { gaussianSource } from './gaussian';
 import { localTimestamp } from './local-timestamp';
 import { loadShape, type DayKind } from './load-shape';
-import { checkMarketSpec, type MarketSpec } from './market-spec';
+import { checkMarketSpec, type ExtraDriver, type MarketSpec } from './market-spec';
 import { meritOrderPrice } from './merit-order';
 import { solarShare } from './solar-share';
 
@@ -27,6 +27,8 @@ export interface DemoRow {
 }
 
 const TAU = 2 * Math.PI;
+/** day-to-day persistence (AR(1) coefficient) of the day-level price shock */
+const SHOCK_PERSISTENCE = 0.55;
 
 /**
  * Generates an invented market whose prices behave like day-ahead prices.
@@ -57,6 +59,22 @@ const TAU = 2 * Math.PI;
  * @example generateMarket(DEMO_MARKET, 1)[0].timestamp // '2024-06-01T00:00:00+02:00'
  */
 export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
+  return generateMarketWithOracle(spec, seed).rows;
+}
+
+/**
+ * The market of generateMarket together with, per row, a plug-in estimate of
+ * the best forecast anyone could make: the price with every unforeseeable
+ * part at its conditional median given what a forecaster knows the day
+ * before (period noise and spikes at 0, the day-level shock at its AR(1)
+ * expectation from the day before, published driver forecasts in place of
+ * the true load, wind and solar). Slow states a forecaster can only read
+ * from prices (fuel cost, outages) and unpublished wind or solar enter at
+ * their true values, so the floor errs on the generous side: a model's MAE
+ * divided by the floor's MAE shows how much is left to learn.
+ * Drawing it takes no random numbers, so the rows equal generateMarket's.
+ */
+export function generateMarketWithOracle(spec: MarketSpec, seed: number): { rows: DemoRow[]; oracle: number[] } {
   if (!Number.isFinite(seed)) throw new InputError(`demo seed must be a finite number, got ${seed}`);
   checkMarketSpec(spec);
   const random = seedrandom.alea(`spotloom-demo:${seed}`);
@@ -69,7 +87,7 @@ export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
   const tempAnomaly = ar1(n, 0.5, climate.anomalyC, normal);
   const windRegime = ar1(n, 0.65, 1, normal);
   const cloud = ar1(n, climate.cloudPersistence, 1, normal);
-  const priceShock = ar1(n, 0.55, 0.06, normal);
+  const priceShock = ar1(n, SHOCK_PERSISTENCE, 0.06, normal);
   const loadShock = ar1(n, 0.2, 0.05, normal);
   const tempError = Array.from({ length: n }, () => climate.forecastErrorC * normal());
   const loadError = Array.from({ length: n }, () => load.forecastError * normal());
@@ -89,6 +107,8 @@ export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
   let loadNoise = 0;
   let priceNoise = 0;
   const rows: DemoRow[] = [];
+  const oracle: number[] = [];
+  const published = (name: ExtraDriver) => spec.extraDrivers.includes(name);
 
   const calendar = dayPeriods(spec.start, spec.end, spec.zone, spec.resolution);
   for (let d = 0; d < days; d++) {
@@ -137,6 +157,9 @@ export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
       price += priceNoise * (1.5 + 0.035 * Math.abs(price));
       if (spike && h >= spike.from && h < spike.from + spike.hours) price += spike.size * (Math.abs(price) + fuelCost[d]);
 
+      const knownShare = (loadForecast - (published('wind_forecast') ? windForecast : wind) - (published('solar_forecast') ? solarForecast : solar)) / capacity;
+      oracle.push(round(meritOrderPrice(knownShare, fuelCost[d]) * Math.exp(d > 0 ? SHOCK_PERSISTENCE * priceShock[d - 1] : 0), 2));
+
       const row: DemoRow = {
         timestamp: localTimestamp(date, periods.clock[k], periods.offset[k]),
         price: round(price, 2),
@@ -149,7 +172,7 @@ export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
       rows.push(row);
     }
   }
-  return rows;
+  return { rows, oracle };
 }
 
 function dayKind(date: string, region: string): DayKind {
@@ -173,13 +196,16 @@ function ar1(n: number, phi: number, sd: number, normal: () => number): number[]
   return out;
 }
 
-/** Daily fuel cost: log random walk pulled towards a trending long-run level. */
+/** Daily fuel cost: log random walk pulled towards a trending long-run level, times an optional shock. */
 function fuelPath(n: number, spec: MarketSpec, normal: () => number): number[] {
-  const { start, trendPerYear, reversionPerDay, volatilityPerDay } = spec.fuel;
+  const { start, trendPerYear, reversionPerDay, volatilityPerDay, shock } = spec.fuel;
   const out = new Array<number>(n);
   let x = Math.log(start);
+  const shockFrom = shock ? dayNumber(shock.from) - dayNumber(spec.start) : Infinity;
   for (let i = 0; i < n; i++) {
-    out[i] = Math.exp(x);
+    // a shock (a fuel-supply crisis) lifts the cost by `factor`, ramping in linearly over its days
+    const lift = shock ? 1 + (shock.factor - 1) * Math.min(1, Math.max(0, (i - shockFrom + 1) / shock.days)) : 1;
+    out[i] = Math.exp(x) * lift;
     const level = Math.log(start) + (Math.log(1 + trendPerYear) * (i + 1)) / 365;
     x += Math.log(1 + trendPerYear) / 365 + reversionPerDay * (level - x) + volatilityPerDay * normal();
   }
