@@ -19,7 +19,11 @@ import { fitStandardiser, standardise, type Standardiser } from './standardiser'
 import { FeatureCache, type TrainingDay } from './training-days';
 import { fitUnitRange, fromUnit, type UnitRange } from './unit-range';
 
-export const MIN_TRAINING_DAYS = 56;
+/** Fewest days of price history a learned model trains on. */
+export const MIN_HISTORY_DAYS = 28;
+/** Fewest usable training days: 28 days less the 8 the first day's inputs need (scale window 7, week-on-week change). */
+export const MIN_TRAINING_DAYS = 20;
+const MIN_FIT_DAYS = 10;
 
 /**
  * Fits a learner on every day of `view` (blocks.ts says how the days are
@@ -33,6 +37,9 @@ export const MIN_TRAINING_DAYS = 56;
  * refitted on every day and the networks are warm-started on every day.
  */
 export function fitLearner(view: DayFrame, s: LearnerSettings, progress?: Progress): { state: LearnerState; cache: FeatureCache; sums: MemberSums[] } {
+  if (view.price.length < MIN_HISTORY_DAYS) {
+    throw new InputError(`model ${s.kind} needs at least ${MIN_HISTORY_DAYS} days of price history; the data has ${view.price.length}`);
+  }
   const { setup, notes } = chooseSetup(view, s);
   const cache = new FeatureCache(setup);
   const days = cache.trainingDays(view, 0, view.price.length);
@@ -43,7 +50,7 @@ export function fitLearner(view: DayFrame, s: LearnerSettings, progress?: Progre
   const fit = days.slice(0, blocks.fit);
   const tuning = days.slice(blocks.fit, blocks.fit + blocks.tuning);
   const holdout = days.slice(blocks.fit + blocks.tuning);
-  if (fit.length < MIN_TRAINING_DAYS / 2) {
+  if (fit.length < MIN_FIT_DAYS) {
     throw new InputError(`a tuning block of ${blocks.tuning} days leaves ${fit.length} days to fit on; give a shorter one or more history`);
   }
   const standardiser = fitStandardiser(fit.map((d) => d.x));

@@ -5,7 +5,7 @@ import { frameBefore, targetDay, type DayFrame } from '../series/day-frame';
 import { addResiduals, bands, REPORTED_COVERAGES } from './bands';
 import { mix3 } from './blend-weights';
 import { LEAR_REFRESH_DAYS, learOnAll, learPoint } from './lear-part';
-import { ensemblePrice, fitLearner, MIN_TRAINING_DAYS } from './fit-learner';
+import { ensemblePrice, fitLearner, MIN_HISTORY_DAYS } from './fit-learner';
 import type { LearnerState } from './learner-state';
 import { LearnerSettingsSchema, type LearnerSettings } from './learner-settings';
 import type { DayAheadModel, DayForecast, Progress } from './model';
@@ -59,8 +59,9 @@ export class Learner implements DayAheadModel {
     return this.settings.coverage;
   }
 
+  /** From 28 days on; shorter histories shrink the level scale's window and the blocks (choose-setup.ts, blocks.ts). */
   get minHistoryDays(): number {
-    return MIN_TRAINING_DAYS + this.settings.scaleWindow;
+    return MIN_HISTORY_DAYS;
   }
 
   /** The linear part takes in every new day; the networks' warm start is rationed (NETWORK_REFRESH_DAYS). */
