@@ -54,7 +54,8 @@ export function bands(pool: ResidualPool, point: Float64Array, scale: number, co
   const slots = point.length;
   const out = coverages.map((coverage) => ({ coverage, lower: new Float64Array(slots), upper: new Float64Array(slots) }));
   const hour = Math.max(1, Math.round(slots / 24));
-  const need = Math.max(...coverages.map(fewestErrors));
+  // the same reach for every band asked, so band() and bands() agree
+  const need = Math.max(...[...coverages, ...REPORTED_COVERAGES].map(fewestErrors));
   const widest = Math.floor((slots - 1) / 2);
   // the slots within `reach` of s (every slot once, the whole day at most)
   const around = (s: number, reach: number) =>
