@@ -81,7 +81,7 @@ export function fitLearner(view: DayFrame, s: LearnerSettings, progress?: Progre
   const linTuning = linearOn(onFit, tuning);
   const nnTuning = networks.length ? neuralOn(tuning) : [];
   const learTuning = learOn(tuning, linTuning);
-  progress?.(1, 1, 'lear part');
+  if (useLear) progress?.(1, 1, 'lear part');
   const weights = s.kind === 'neural' ? { wa: 1, wc: 0 } : s.kind === 'linear' ? { wa: 0, wc: 0 }
     : bestMix3(nnTuning, linTuning, learTuning, scorer(tuning), { a: networks.length > 0, c: learTuning.length > 0 });
   const neuralWeight = weights.wa, learWeight = weights.wc;
