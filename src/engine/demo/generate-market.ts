@@ -64,7 +64,7 @@ const WIND_PERSISTENCE = 0.65;
  * @example generateMarket(DEMO_MARKET, 1)[0].timestamp // '2024-06-01T00:00:00+02:00'
  */
 export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
-  return generateMarketWithOracle(spec, seed).rows;
+  return generate(spec, seed, false).rows;
 }
 
 /**
@@ -84,6 +84,10 @@ export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
  * equal generateMarket's.
  */
 export function generateMarketWithOracle(spec: MarketSpec, seed: number): { rows: DemoRow[]; oracle: number[] } {
+  return generate(spec, seed, true);
+}
+
+function generate(spec: MarketSpec, seed: number, withFloor: boolean): { rows: DemoRow[]; oracle: number[] } {
   if (!Number.isFinite(seed)) throw new InputError(`demo seed must be a finite number, got ${seed}`);
   checkMarketSpec(spec);
   const random = seedrandom.alea(`spotloom-demo:${seed}`);
@@ -179,7 +183,7 @@ export function generateMarketWithOracle(spec: MarketSpec, seed: number): { rows
       if (spike && h >= spike.from && h < spike.from + spike.hours) price += spike.size * (Math.abs(price) + fuelCost[d]);
 
       // the floor: the median of the price over draws of everything unknown the day before
-      for (let j = 0; j < FLOOR_DRAWS; j++) {
+      for (let j = 0; withFloor && j < FLOOR_DRAWS; j++) {
         const z = floorNormal;
         const trueLoadGuess = loadForecast / (1 + loadErrorSd * z());
         let windGuess: number, solarGuess: number;
@@ -197,8 +201,7 @@ export function generateMarketWithOracle(spec: MarketSpec, seed: number): { rows
         p += z() * (1.5 + 0.035 * Math.abs(p));
         draws[j] = p;
       }
-      draws.sort();
-      oracle.push(round(draws[FLOOR_DRAWS >> 1], 2));
+      if (withFloor) oracle.push(round(draws.sort()[FLOOR_DRAWS >> 1], 2));
 
       const row: DemoRow = {
         timestamp: localTimestamp(date, periods.clock[k], periods.offset[k]),

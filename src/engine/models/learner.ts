@@ -1,6 +1,6 @@
 import { InputError } from '../errors';
 import { historyNeeded } from '../features/day-features';
-import type { LevelScale } from '../features/level-scale';
+import { fromScaled, type LevelScale } from '../features/level-scale';
 import { frameBefore, targetDay, type DayFrame } from '../series/day-frame';
 import { addResiduals, bands, REPORTED_COVERAGES } from './bands';
 import { mix3 } from './blend-weights';
@@ -195,7 +195,9 @@ export class Learner implements DayAheadModel {
     // held inside the (widened) range of scaled prices seen in training
     const lin = linearPrice(state.linear, state.standardiser, x, m, scale, state.targetRange);
     const nn = this.nets.length ? [ensemblePrice(this.nets, state.standardiser, state.targetRange, x, scale)] : [];
-    return mix3(nn, [lin], lear ? [lear] : [], state.neuralWeight, lear ? state.learWeight : 0)[0];
+    // LEAR's part is held inside the same range as the others, so the blend never leaves it
+    const held = lear?.map((v, c) => Math.min(fromScaled(state.targetRange.hi[c], scale), Math.max(fromScaled(state.targetRange.lo[c], scale), v)));
+    return mix3(nn, [lin], held ? [held] : [], state.neuralWeight, held ? state.learWeight : 0)[0];
   }
 
   /** The linear model's running sums; after loading a stored model they are rebuilt from the history. */
