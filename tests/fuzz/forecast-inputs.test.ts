@@ -56,8 +56,8 @@ describe('a driver value far outside the training range', () => {
     const { mean, sd } = model.state!.setup.driverStats.load_forecast;
     const frame = inputFrame(history);
     const d = frame.price.length;
-    // the level scale of the forecast day: median and MAD of the 56 days before it (level-scale.ts)
-    const scale = levelScale(frame.price, d, model.settings.scaleWindow)!;
+    // the level scale of the forecast day: median and MAD of the scale window before it (level-scale.ts; 56 days, fewer for a short history)
+    const scale = levelScale(frame.price, d, model.state!.setup.scaleWindow)!;
     const { lo, hi } = model.state!.targetRange;
     const day = frame.days[d];
     fc.assert(fc.property(fc.nat(23), fc.integer({ min: 1, max: 24 }), fc.double({ min: 3, max: 19.99, noNaN: true }), fc.boolean(), (from, hours, z, up) => {

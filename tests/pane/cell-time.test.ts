@@ -36,10 +36,16 @@ describe('timeReader(zone, dateSystem)', () => {
     expect(() => read(45746 + 2.5 / 24, { file: 'History', row: 7, column: 'timestamp' })).toThrow(/History: row 7, column "timestamp": .*does not exist/);
   });
 
-  it('reads ISO 8601 text with an offset, and refuses text without one', () => {
+  it('reads ISO 8601 text with an offset, and local wall-clock text in the zone as data files do', () => {
     const read = timeReader(BERLIN, '1900');
     expect(read('2025-03-30T03:00:00+02:00', {})).toBe(Date.parse('2025-03-30T01:00:00Z'));
-    expect(() => read('2025-03-30 03:00', { row: 3 })).toThrow(/row 3: .*UTC offset/);
+    // ISO 8601-1:2019 5.4: without an offset the time is local; 03:00 on 2025-03-30 is CEST (UTC+2)
+    expect(read('2025-03-30 03:00', { row: 3 })).toBe(Date.parse('2025-03-30T01:00:00Z'));
+    // the repeated autumn hour as text: earlier instant first, then the later one
+    expect(read('2025-10-26 02:00', {})).toBe(Date.parse('2025-10-26T02:00:00+02:00'));
+    expect(read('2025-10-26 02:00', {})).toBe(Date.parse('2025-10-26T02:00:00+01:00'));
+    expect(() => read('2025-03-30 02:30', { row: 9 })).toThrow(/row 9: .*does not exist/);
+    expect(() => read('tomorrow', { row: 4 })).toThrow(/row 4: .*not a timestamp/);
   });
 
   it('refuses a boolean cell', () => {

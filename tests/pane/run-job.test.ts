@@ -73,7 +73,7 @@ describe('runJob(job, post)', () => {
   it('train: a user error becomes one failed reply with its one-line message', async () => {
     const s = await series(20);
     const replies = collect({ type: 'train', series: s, settings: LINEAR, name: 'main' });
-    expect(replies).toEqual([{ type: 'failed', message: expect.stringMatching(/^training needs at least 56 usable days/) }]);
+    expect(replies).toEqual([{ type: 'failed', message: expect.stringMatching(/^model linear needs at least 28 days of price history; the data has 19/) }]);
   });
 
   it('backtest: scores the learned model and both baselines on the same periods; baselines match runBacktest', async () => {

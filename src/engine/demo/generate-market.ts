@@ -7,7 +7,7 @@ import { dayPeriods } from './day-periods';
 import { gaussianSource } from './gaussian';
 import { localTimestamp } from './local-timestamp';
 import { loadShape, type DayKind } from './load-shape';
-import { checkMarketSpec, type MarketSpec } from './market-spec';
+import { checkMarketSpec, type ExtraDriver, type MarketSpec } from './market-spec';
 import { meritOrderPrice } from './merit-order';
 import { solarShare } from './solar-share';
 
@@ -27,6 +27,13 @@ export interface DemoRow {
 }
 
 const TAU = 2 * Math.PI;
+/** day-to-day persistence (AR(1) coefficient) of the day-level price shock */
+const SHOCK_PERSISTENCE = 0.55;
+const SHOCK_SD = 0.06;
+/** draws per period behind the floor's median */
+const FLOOR_DRAWS = 201;
+/** day-to-day persistence of the wind regime */
+const WIND_PERSISTENCE = 0.65;
 
 /**
  * Generates an invented market whose prices behave like day-ahead prices.
@@ -57,6 +64,30 @@ const TAU = 2 * Math.PI;
  * @example generateMarket(DEMO_MARKET, 1)[0].timestamp // '2024-06-01T00:00:00+02:00'
  */
 export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
+  return generate(spec, seed, false).rows;
+}
+
+/**
+ * The market of generateMarket together with, per row, the generator's own
+ * floor: the median price over 201 draws of everything a forecaster cannot
+ * know the day before (the load's, wind's and solar's deviation from their
+ * published forecasts, or where they are not published the next day's wind
+ * regime and this day's cloudiness given the day before; the day's fuel
+ * move, price shock and period noise), with the day-level states of the day
+ * before (fuel cost, outages, shock, cloudiness, and the wind regime this
+ * day starts from, which the day before's last hours show) at their true
+ * values, which no forecaster sees exactly. The median minimises the
+ * expected absolute error, so a model's MAE over the floor's shows how much
+ * is left to learn; the floor errs on the generous side (it knows the day
+ * before exactly; spikes and new outages are left out, a few per cent of
+ * days). Its draws come from a random source of their own, so the rows
+ * equal generateMarket's.
+ */
+export function generateMarketWithOracle(spec: MarketSpec, seed: number): { rows: DemoRow[]; oracle: number[] } {
+  return generate(spec, seed, true);
+}
+
+function generate(spec: MarketSpec, seed: number, withFloor: boolean): { rows: DemoRow[]; oracle: number[] } {
   if (!Number.isFinite(seed)) throw new InputError(`demo seed must be a finite number, got ${seed}`);
   checkMarketSpec(spec);
   const random = seedrandom.alea(`spotloom-demo:${seed}`);
@@ -67,9 +98,9 @@ export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
   // ---- day-level states (one extra day so intraday values can glide into the next day)
   const n = days + 1;
   const tempAnomaly = ar1(n, 0.5, climate.anomalyC, normal);
-  const windRegime = ar1(n, 0.65, 1, normal);
+  const windRegime = ar1(n, WIND_PERSISTENCE, 1, normal);
   const cloud = ar1(n, climate.cloudPersistence, 1, normal);
-  const priceShock = ar1(n, 0.55, 0.06, normal);
+  const priceShock = ar1(n, SHOCK_PERSISTENCE, SHOCK_SD, normal);
   const loadShock = ar1(n, 0.2, 0.05, normal);
   const tempError = Array.from({ length: n }, () => climate.forecastErrorC * normal());
   const loadError = Array.from({ length: n }, () => load.forecastError * normal());
@@ -89,6 +120,15 @@ export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
   let loadNoise = 0;
   let priceNoise = 0;
   const rows: DemoRow[] = [];
+  const oracle: number[] = [];
+  const published = (name: ExtraDriver) => spec.extraDrivers.includes(name);
+  // the floor's own random source, so the rows stay those of generateMarket
+  const floorNormal = gaussianSource(seedrandom.alea(`spotloom-floor:${seed}`));
+  const draws = new Float64Array(FLOOR_DRAWS);
+  const loadErrorSd = Math.hypot(load.forecastError, 0.006);
+  const windInnovation = Math.sqrt(1 - WIND_PERSISTENCE ** 2);
+  const cloudInnovation = Math.sqrt(1 - climate.cloudPersistence ** 2);
+  const shockInnovation = SHOCK_SD * Math.sqrt(1 - SHOCK_PERSISTENCE ** 2);
 
   const calendar = dayPeriods(spec.start, spec.end, spec.zone, spec.resolution);
   for (let d = 0; d < days; d++) {
@@ -98,8 +138,12 @@ export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
     const count = periods.start.length;
     const season = Math.cos((TAU * (dayOfYear(date) - climate.warmestDay)) / 365.25);
     const winter = -season; // +1 on the coldest day of the year: windier
-    const clearness = 0.4 + 0.6 / (1 + Math.exp(-(1.2 * cloud[d] + 0.9 + 0.4 * season)));
+    const clearnessOf = (c: number) => 0.4 + 0.6 / (1 + Math.exp(-(1.2 * c + 0.9 + 0.4 * season)));
+    const clearness = clearnessOf(cloud[d]);
     const capacity = supply.capacityMW * (1 - outage[d]);
+    // the floor's view: the day-level states of the day before
+    const prior = Math.max(0, d - 1);
+    const knownCapacity = supply.capacityMW * (1 - outage[prior]);
     const spike = spikes[d];
 
     for (let k = 0; k < count; k++) {
@@ -123,7 +167,8 @@ export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
 
       // wind and solar
       const regime = (1 - f) * windRegime[d] + f * windRegime[d + 1];
-      const windShare = 1 / (1 + Math.exp(-(1.3 * regime - 1.1 + 0.35 * winter + 0.15 * Math.cos((TAU * (h - 3)) / 24))));
+      const windShareOf = (r: number) => 1 / (1 + Math.exp(-(1.3 * r - 1.1 + 0.35 * winter + 0.15 * Math.cos((TAU * (h - 3)) / 24))));
+      const windShare = windShareOf(regime);
       const wind = supply.windMW * windShare;
       const windForecast = supply.windMW * clamp01(windShare * (1 + windError[d]) + 0.02 * normal());
       const sun = solarShare(t + (spec.resolution * 60_000) / 2, spec.latitude, spec.longitude);
@@ -137,6 +182,27 @@ export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
       price += priceNoise * (1.5 + 0.035 * Math.abs(price));
       if (spike && h >= spike.from && h < spike.from + spike.hours) price += spike.size * (Math.abs(price) + fuelCost[d]);
 
+      // the floor: the median of the price over draws of everything unknown the day before
+      for (let j = 0; withFloor && j < FLOOR_DRAWS; j++) {
+        const z = floorNormal;
+        const trueLoadGuess = loadForecast / (1 + loadErrorSd * z());
+        let windGuess: number, solarGuess: number;
+        if (published('wind_forecast')) windGuess = Math.max(0, windForecast / (1 + 0.1 * z()));
+        else {
+          // the regime glides from day to day, so the last hours of the day before already show this day's regime
+          const rd = windRegime[d];
+          windGuess = supply.windMW * windShareOf((1 - f) * rd + f * (WIND_PERSISTENCE * rd + windInnovation * z()));
+        }
+        if (published('solar_forecast')) solarGuess = Math.max(0, solarForecast / (1 + 0.07 * z()));
+        else solarGuess = supply.solarMW * sun * clamp01(clearnessOf(climate.cloudPersistence * cloud[prior] + cloudInnovation * z()) * (1 + 0.06 * z()));
+        const guessShare = (trueLoadGuess - windGuess - solarGuess) / knownCapacity;
+        const shock = SHOCK_PERSISTENCE * priceShock[prior] + shockInnovation * z();
+        let p = meritOrderPrice(guessShare, fuelCost[prior] * Math.exp(spec.fuel.volatilityPerDay * z())) * Math.exp(shock);
+        p += z() * (1.5 + 0.035 * Math.abs(p));
+        draws[j] = p;
+      }
+      if (withFloor) oracle.push(round(draws.sort()[FLOOR_DRAWS >> 1], 2));
+
       const row: DemoRow = {
         timestamp: localTimestamp(date, periods.clock[k], periods.offset[k]),
         price: round(price, 2),
@@ -149,7 +215,7 @@ export function generateMarket(spec: MarketSpec, seed: number): DemoRow[] {
       rows.push(row);
     }
   }
-  return rows;
+  return { rows, oracle };
 }
 
 function dayKind(date: string, region: string): DayKind {
@@ -173,13 +239,16 @@ function ar1(n: number, phi: number, sd: number, normal: () => number): number[]
   return out;
 }
 
-/** Daily fuel cost: log random walk pulled towards a trending long-run level. */
+/** Daily fuel cost: log random walk pulled towards a trending long-run level, times an optional shock. */
 function fuelPath(n: number, spec: MarketSpec, normal: () => number): number[] {
-  const { start, trendPerYear, reversionPerDay, volatilityPerDay } = spec.fuel;
+  const { start, trendPerYear, reversionPerDay, volatilityPerDay, shock } = spec.fuel;
   const out = new Array<number>(n);
   let x = Math.log(start);
+  const shockFrom = shock ? dayNumber(shock.from) - dayNumber(spec.start) : Infinity;
   for (let i = 0; i < n; i++) {
-    out[i] = Math.exp(x);
+    // a shock (a fuel-supply crisis) lifts the cost by `factor`, ramping in linearly over its days
+    const lift = shock ? 1 + (shock.factor - 1) * Math.min(1, Math.max(0, (i - shockFrom + 1) / shock.days)) : 1;
+    out[i] = Math.exp(x) * lift;
     const level = Math.log(start) + (Math.log(1 + trendPerYear) * (i + 1)) / 365;
     x += Math.log(1 + trendPerYear) / 365 + reversionPerDay * (level - x) + volatilityPerDay * normal();
   }

@@ -80,6 +80,8 @@ export interface MarketSpec {
     reversionPerDay: number;
     /** daily volatility of the log cost */
     volatilityPerDay: number;
+    /** a lasting jump of the cost: from `from` it ramps linearly over `days` to `factor` times the path */
+    shock?: { from: string; days: number; factor: number };
   };
   /** expected number of unforeseeable price spikes (plant trips) per year */
   spikesPerYear: number;
@@ -123,6 +125,12 @@ export function checkMarketSpec(spec: MarketSpec): void {
   }
   if (!(spec.fuel.reversionPerDay >= 0 && spec.fuel.reversionPerDay < 1)) {
     fail(`fuel.reversionPerDay must lie in [0, 1), got ${spec.fuel.reversionPerDay}`);
+  }
+  const shock = spec.fuel.shock;
+  if (shock) {
+    if (!/^\d{4}-\d{2}-\d{2}$/.test(shock.from)) fail(`fuel.shock.from must be a date YYYY-MM-DD, got ${shock.from}`);
+    if (!(Number.isInteger(shock.days) && shock.days >= 1)) fail(`fuel.shock.days must be a whole number of days, 1 or more, got ${shock.days}`);
+    if (!(shock.factor > 0)) fail(`fuel.shock.factor must be a positive number, got ${shock.factor}`);
   }
   if (!(Math.abs(spec.latitude) <= 90 && Math.abs(spec.longitude) <= 180)) fail('latitude/longitude out of range');
   if (new Set(spec.extraDrivers).size !== spec.extraDrivers.length) fail('extraDrivers lists a column twice');

@@ -76,3 +76,41 @@ export const SOLAR_MARKET: MarketSpec = {
   fuel: { start: 95, trendPerYear: 0.02, reversionPerDay: 0.012, volatilityPerDay: 0.02 },
   spikesPerYear: 12,
 };
+
+/**
+ * The invented level-shift scenario (half-hourly). The market zone
+ * "Cindervale" and the company "Marrowby Grid Traders" are made up. The zone
+ * keeps British clocks (Europe/London) and observes the public holidays of
+ * region GB-ENG (date-holidays data). One year of 30-minute periods ending
+ * 30 November 2026, so about nine months of history before a 91-day test;
+ * published drivers are temperature, load and wind forecasts. From
+ * 18 August 2026 the fuel cost doubles over four weeks (an invented supply
+ * crisis), so the price level doubles around the start of the test.
+ */
+export const SHIFT_MARKET: MarketSpec = {
+  name: 'Cindervale',
+  company: 'Marrowby Grid Traders',
+  description:
+    'invented half-hourly, windy market zone Cindervale, traded by the invented Marrowby Grid Traders; Europe/London clocks, GB-ENG public holidays; its fuel cost doubles from 18 August 2026',
+  zone: 'Europe/London',
+  region: 'GB-ENG',
+  start: '2025-12-01',
+  end: '2026-11-30',
+  resolution: 30,
+  latitude: 53.5,
+  longitude: -1.5,
+  currency: 'GBP',
+  extraDrivers: ['wind_forecast'],
+  climate: { meanC: 10, seasonC: 6.5, warmestDay: 205, dayNightC: 7, anomalyC: 3, forecastErrorC: 0.9, cloudPersistence: 0.6 },
+  load: {
+    baseMW: 4200,
+    heatingMWPerC: 110,
+    heatingBelowC: 15,
+    coolingMWPerC: 20,
+    coolingAboveC: 25,
+    forecastError: 0.015,
+  },
+  supply: { capacityMW: 6200, windMW: 2600, solarMW: 600 },
+  fuel: { start: 70, trendPerYear: 0.02, reversionPerDay: 0.01, volatilityPerDay: 0.018, shock: { from: '2026-08-18', days: 28, factor: 2 } },
+  spikesPerYear: 10,
+};

@@ -3,6 +3,7 @@ import { featureNames } from '../features/day-features';
 import { Learner, type LearnerState } from '../models/learner';
 import type { NetworkJson } from '../models/network';
 import { decodeFloats } from './base64-floats';
+import { fromStoredLear } from './lear-file';
 import { MAX_MODEL_BYTES, MODEL_FORMAT, MODEL_VERSION, StoredModelSchema, type StoredModel } from './model-schema';
 
 /**
@@ -64,6 +65,12 @@ export function learnerFromStored(stored: StoredModel, source = 'the model'): Le
     }
     return { sizes: [...n.sizes], layers };
   });
+  const lear = () => {
+    if (!stored.lear) return undefined;
+    const cal = fromStoredLear(stored.lear, m, stored.setup.drivers);
+    return typeof cal === 'string' ? bad(cal) : cal;
+  };
+  if ((stored.neuralWeight + (stored.learWeight ?? 0)) > 1 + 1e-9) bad('the blend weights add up to more than 1');
   const driverStats: LearnerState['setup']['driverStats'] = Object.create(null);
   for (const d of stored.setup.driverStats) driverStats[d.name] = { mean: d.mean, sd: d.sd };
   const state: LearnerState = {
@@ -74,6 +81,8 @@ export function learnerFromStored(stored: StoredModel, source = 'the model'): Le
     networks,
     targetRange: { lo: floats(stored.targetRange.lo, 8, m, 'targetRange.lo'), hi: floats(stored.targetRange.hi, 8, m, 'targetRange.hi') },
     neuralWeight: stored.neuralWeight,
+    learWeight: stored.learWeight ?? 0,
+    lear: lear(),
     residuals: {
       keep: stored.residuals.keep,
       bySlot: stored.residuals.bySlot.map((r, k) => {
@@ -94,7 +103,7 @@ export function learnerFromStored(stored: StoredModel, source = 'the model'): Le
 }
 
 function loadedScores(v: StoredModel['holdout']): LearnerState['holdout'] {
-  return { ...v, maeNeural: v.maeNeural ?? NaN, maeNaiveWeek: v.maeNaiveWeek ?? NaN };
+  return { ...v, maeNeural: v.maeNeural ?? NaN, maeLear: v.maeLear ?? NaN, maeNaiveWeek: v.maeNaiveWeek ?? NaN };
 }
 
 function featureCount(stored: StoredModel): number {

@@ -2,6 +2,7 @@ import { z } from '../schema-config';
 import { ALL_FEATURE_GROUPS, type FeatureGroup } from '../features/feature-groups';
 import { LearnerSettingsSchema } from '../models/learner-settings';
 import { BASE64 } from './base64-floats';
+import { StoredLearSchema } from './lear-file';
 
 /**
  * The stored model, version 2: the one schema of a model saved in a
@@ -27,7 +28,7 @@ const Finite = z.number().finite();
 const Day = z.string().regex(/^\d{4}-\d{2}-\d{2}$/);
 /** a model's errors on one block of its training days (models/blocks.ts); null where a part is absent */
 const BlockScoresSchema = z.strictObject({
-  days: z.number().int().min(0), mae: Finite, maeLinear: Finite, maeNeural: Finite.nullable(), maeNaiveWeek: Finite.nullable(),
+  days: z.number().int().min(0), mae: Finite, maeLinear: Finite, maeNeural: Finite.nullable(), maeLear: Finite.nullable().optional(), maeNaiveWeek: Finite.nullable(),
 });
 
 export const StoredModelSchema = z.strictObject({
@@ -56,6 +57,9 @@ export const StoredModelSchema = z.strictObject({
   })).max(10),
   targetRange: z.strictObject({ lo: Floats, hi: Floats }),
   neuralWeight: Finite.min(0).max(1),
+  /** weight of the LEAR part (absent in files saved before the blend had one) */
+  learWeight: Finite.min(0).max(1).optional(),
+  lear: StoredLearSchema.optional(),
   residuals: z.strictObject({ keep: z.number().int().min(1).max(1000), bySlot: z.array(Floats).max(96) }),
   tuning: BlockScoresSchema,
   holdout: BlockScoresSchema,

@@ -2,6 +2,7 @@ import { InputError } from '../errors';
 import type { BlockScores, Learner } from '../models/learner';
 import type { Resolution } from '../series/series';
 import { encodeFloats } from './base64-floats';
+import { toStoredLear } from './lear-file';
 import { MAX_MODEL_BYTES, MODEL_FORMAT, MODEL_VERSION, StoredModelSchema, type StoredModel } from './model-schema';
 
 /**
@@ -39,6 +40,8 @@ export function toStoredModel(learner: Learner, meta: { name: string; zone: stri
     })),
     targetRange: { lo: f64(state.targetRange.lo), hi: f64(state.targetRange.hi) },
     neuralWeight: state.neuralWeight,
+    learWeight: state.learWeight,
+    ...(state.lear ? { lear: toStoredLear(state.lear) } : {}),
     residuals: { keep: state.residuals.keep, bySlot: state.residuals.bySlot.map((r) => encodeFloats(r, 4)) },
     tuning: storedScores(state.tuning),
     holdout: storedScores(state.holdout),
@@ -55,7 +58,7 @@ export function toStoredModel(learner: Learner, meta: { name: string; zone: stri
 
 function storedScores(v: BlockScores): StoredModel['holdout'] {
   const orNull = (x: number) => (Number.isFinite(x) ? x : null);
-  return { ...v, maeNeural: orNull(v.maeNeural), maeNaiveWeek: orNull(v.maeNaiveWeek) };
+  return { ...v, maeNeural: orNull(v.maeNeural), maeLear: orNull(v.maeLear), maeNaiveWeek: orNull(v.maeNaiveWeek) };
 }
 
 export function storedModelText(stored: StoredModel): string {

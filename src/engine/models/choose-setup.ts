@@ -21,6 +21,8 @@ export function chooseSetup(view: DayFrame, s: LearnerSettings): { setup: Featur
   if (view.price.length < 364 + 365) drop('price_year_ago', 'less than two years of history');
   if (!s.region) drop('holidays', 'no holiday region given');
   if (drivers.length === 0) { drop('drivers_target', 'no driver columns'); drop('drivers_lagged', 'no driver columns'); drop('residual_load', 'no driver columns'); }
+  const scaleWindow = scaleWindowFor(s.scaleWindow, view.price.length);
+  if (scaleWindow < s.scaleWindow) notes.push(`level scale over ${scaleWindow} days instead of ${s.scaleWindow}: the history is short (${view.price.length} days)`);
   if (groups.length === 0) throw new InputError('no feature group is left to train on; switch on price lags or add driver columns');
   const driverStats: FeatureSetup['driverStats'] = {};
   for (const name of drivers) {
@@ -30,5 +32,15 @@ export function chooseSetup(view: DayFrame, s: LearnerSettings): { setup: Featur
     const sd = Math.sqrt(values.reduce((a, b) => a + (b - mean) ** 2, 0) / values.length) || 1;
     driverStats[name] = { mean, sd };
   }
-  return { setup: { groups, drivers, driverStats, region: s.region, scaleWindow: s.scaleWindow, slots: view.slots }, notes };
+  return { setup: { groups, drivers, driverStats, region: s.region, scaleWindow, slots: view.slots }, notes };
+}
+
+/**
+ * The level scale's window for a history of `days` days: the setting, but
+ * at most a quarter of the history (at least 7 days), so a short history
+ * keeps three quarters of its days to learn from.
+ * @example scaleWindowFor(56, 28) // 7
+ */
+export function scaleWindowFor(setting: number, days: number): number {
+  return Math.min(setting, Math.max(7, Math.floor(days / 4)));
 }

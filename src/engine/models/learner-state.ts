@@ -1,5 +1,6 @@
 import type { FeatureSetup } from '../features/day-features';
 import type { ResidualPool } from './bands';
+import type { LearCalibration } from './lear-calibrate';
 import type { LinearMember } from './linear-ensemble';
 import type { NetworkJson } from './network';
 import type { GroupImportance } from './permutation-importance';
@@ -13,6 +14,8 @@ export interface BlockScores {
   mae: number;
   maeLinear: number;
   maeNeural: number;
+  /** LEAR's error where the blend has a LEAR part (NaN otherwise) */
+  maeLear: number;
   maeNaiveWeek: number;
 }
 
@@ -28,6 +31,10 @@ export interface LearnerState {
   targetRange: UnitRange;
   /** weight of the network ensemble in the blend (1 = neural only, 0 = linear only) */
   neuralWeight: number;
+  /** weight of LEAR in the blend; the linear part has 1 - neuralWeight - learWeight */
+  learWeight: number;
+  /** LEAR's newest calibration, where learWeight > 0 */
+  lear?: LearCalibration;
   residuals: ResidualPool;
   /** scores on the block every choice was made on: in-sample for those choices */
   tuning: BlockScores;

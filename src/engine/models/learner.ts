@@ -1,10 +1,11 @@
 import { InputError } from '../errors';
 import { historyNeeded } from '../features/day-features';
-import type { LevelScale } from '../features/level-scale';
-import { targetDay, type DayFrame } from '../series/day-frame';
+import { fromScaled, type LevelScale } from '../features/level-scale';
+import { frameBefore, targetDay, type DayFrame } from '../series/day-frame';
 import { addResiduals, bands, REPORTED_COVERAGES } from './bands';
-import { mix } from './blend-weights';
-import { ensemblePrice, fitLearner, MIN_TRAINING_DAYS } from './fit-learner';
+import { mix3 } from './blend-weights';
+import { LEAR_REFRESH_DAYS, learOnAll, learPoint } from './lear-part';
+import { ensemblePrice, fitLearner, MIN_HISTORY_DAYS } from './fit-learner';
 import type { LearnerState } from './learner-state';
 import { LearnerSettingsSchema, type LearnerSettings } from './learner-settings';
 import type { DayAheadModel, DayForecast, Progress } from './model';
@@ -43,6 +44,8 @@ export class Learner implements DayAheadModel {
   private readonly issued = new Map<number, { point: Float64Array; scale: number }>();
   /** day index of the networks' last warm start (or fit) */
   private lastWarm?: number;
+  /** day index of LEAR's last calibration (or fit) */
+  private lastLear?: number;
 
   constructor(settings: LearnerSettings, state?: LearnerState) {
     const checked = LearnerSettingsSchema.safeParse(settings);
@@ -56,8 +59,9 @@ export class Learner implements DayAheadModel {
     return this.settings.coverage;
   }
 
+  /** From 28 days on; shorter histories shrink the level scale's window and the blocks (choose-setup.ts, blocks.ts). */
   get minHistoryDays(): number {
-    return MIN_TRAINING_DAYS + this.settings.scaleWindow;
+    return MIN_HISTORY_DAYS;
   }
 
   /** The linear part takes in every new day; the networks' warm start is rationed (NETWORK_REFRESH_DAYS). */
@@ -69,6 +73,7 @@ export class Learner implements DayAheadModel {
     const { state, cache, sums } = fitLearner(view, this.settings, progress);
     this.adopt(state, cache, sums);
     this.lastWarm = view.price.length;
+    this.lastLear = view.price.length;
   }
 
   predict(view: DayFrame): DayForecast {
@@ -79,7 +84,7 @@ export class Learner implements DayAheadModel {
     const f = this.featureCache().features(view, d);
     if (!f) throw new InputError(`cannot forecast ${view.days[d].date}: it needs ${historyNeeded(state.setup)} days of known prices before it`);
     this.catchUpErrors(view, d);
-    const point = this.pointForecast(f.x, f.scale);
+    const point = this.pointForecast(f.x, f.scale, learPoint(state.lear, view));
     const [own, ...reported] = bands(state.residuals, point, f.scale.scale, [this.settings.coverage, ...REPORTED_COVERAGES]);
     const { lower, upper } = own;
     // a damaged or hand-edited model, or inputs far outside anything trained on, can overflow sinh
@@ -110,6 +115,12 @@ export class Learner implements DayAheadModel {
       state.networks = refreshNetworks(state.networks, samples, this.settings, view.price.length);
       this.nets = state.networks.map(loadNetwork);
       progress?.(1, 1, 'warm start');
+    }
+    const sinceLear = this.lastLear === undefined ? Infinity : view.price.length - this.lastLear;
+    if (state.lear && sinceLear >= LEAR_REFRESH_DAYS) {
+      this.lastLear = view.price.length;
+      state.lear = learOnAll(view) ?? state.lear;
+      progress?.(1, 1, 'lear part');
     }
   }
 
@@ -151,7 +162,7 @@ export class Learner implements DayAheadModel {
       let issued = this.issued.get(k);
       if (!issued && !this.inputProblem(view, k)) {
         const f = this.featureCache().features(view, k);
-        if (f) issued = { point: this.pointForecast(f.x, f.scale), scale: f.scale.scale };
+        if (f) issued = { point: this.pointForecast(f.x, f.scale, learPoint(state.lear, frameBefore(view, k))), scale: f.scale.scale };
       }
       if (issued) addResiduals(state.residuals, view.price[k], issued.point, issued.scale);
     }
@@ -164,19 +175,29 @@ export class Learner implements DayAheadModel {
     return this.featureCache().features(view, d);
   }
 
-  /** The point forecast (per clock slot) for a feature vector on a level scale, without any input checks. */
-  forecastFromFeatures(x: Float64Array, scale: LevelScale): Float64Array {
-    return this.pointForecast(x, scale);
+  /** LEAR's part of the forecast of the view's target day (undefined without a LEAR part or when its inputs are unknown). */
+  learPartOf(view: DayFrame): Float64Array | undefined {
+    return learPoint(this.fitted().lear, view);
   }
 
-  private pointForecast(x: Float64Array, scale: LevelScale): Float64Array {
+  /**
+   * The point forecast (per clock slot) for a feature vector on a level
+   * scale and LEAR's part (learPartOf), without any input checks. Without
+   * LEAR's part its weight goes to the linear part.
+   */
+  forecastFromFeatures(x: Float64Array, scale: LevelScale, lear?: Float64Array): Float64Array {
+    return this.pointForecast(x, scale, lear);
+  }
+
+  private pointForecast(x: Float64Array, scale: LevelScale, lear: Float64Array | undefined): Float64Array {
     const state = this.fitted();
     const m = state.targetRange.lo.length;
     // held inside the (widened) range of scaled prices seen in training
     const lin = linearPrice(state.linear, state.standardiser, x, m, scale, state.targetRange);
-    if (this.nets.length === 0) return lin;
-    const nn = ensemblePrice(this.nets, state.standardiser, state.targetRange, x, scale);
-    return mix([nn], [lin], state.neuralWeight)[0];
+    const nn = this.nets.length ? [ensemblePrice(this.nets, state.standardiser, state.targetRange, x, scale)] : [];
+    // LEAR's part is held inside the same range as the others, so the blend never leaves it
+    const held = lear?.map((v, c) => Math.min(fromScaled(state.targetRange.hi[c], scale), Math.max(fromScaled(state.targetRange.lo[c], scale), v)));
+    return mix3(nn, [lin], held ? [held] : [], state.neuralWeight, held ? state.learWeight : 0)[0];
   }
 
   /** The linear model's running sums; after loading a stored model they are rebuilt from the history. */

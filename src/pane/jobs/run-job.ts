@@ -7,7 +7,7 @@ import type { BacktestOutcome, CheckRow, Job, ProgressReply, Reply } from './pro
 /**
  * Where a progress report of the engine lands on the job's 0…1 bar. A
  * learned model reports its linear part, then network epochs (most of the
- * time), then feature importance; a backtest first fits, then walks the days.
+ * time), then its LEAR part (blend), then feature importance; a backtest first fits, then walks the days.
  *
  * @example trainFraction('network epochs', 50, 100) // 0.475
  */
@@ -15,6 +15,7 @@ export function trainFraction(what: string, done: number, total: number): number
   const share = total > 0 ? Math.min(1, Math.max(0, done / total)) : 1;
   if (what === 'linear model') return 0.05;
   if (what === 'network epochs') return 0.05 + 0.85 * share;
+  if (what === 'lear part') return 0.92;
   if (what === 'feature importance') return 0.95;
   return share;
 }

@@ -49,23 +49,27 @@ describe('conformalRanks(n, coverage)', () => {
 });
 
 describe('band(pool, point, scale, coverage)', () => {
-  it('puts the edges at the conformal order statistics of the pooled errors of the slot and its neighbours', () => {
-    // the 11 values of r-quantile-mad.json sorted: -12.75 -3.5 0 12.25 17 29.9 40 41.2 55.5 63.3 88.1;
-    // at 50 %: ranks 3 and 9 -> 0 and 55.5; at 90 % ranks 0 and 12 of 11, so no band
-    const pool = emptyPool(24, 100);
-    pool.bySlot[0] = [...ref.quantile.x]; // unsorted, as a pool holds them
+  it('puts the edges at the conformal order statistics of the errors of the slot and its neighbours within an hour', () => {
+    // the 11 values of r-quantile-mad.json sorted: -12.75 -3.5 0 12.25 17 29.9 40 41.2 55.5 63.3 88.1, each 9 times in slot 0
+    // (99 errors, the fewest the widest reported level, 98 %, needs); 99 sevens in slot 12
+    const pool = emptyPool(24, 200);
+    pool.bySlot[0] = Array.from({ length: 99 }, (_, i) => ref.quantile.x[i % 11]);
+    pool.bySlot[12] = new Array(99).fill(7);
     const point = new Float64Array(24).fill(100);
     const half = band(pool, point, 2, 0.5);
+    // 50 % of 99: ranks floor(100 · 0.25) = 25 and ceil(100 · 0.75) = 75, i.e. the 3rd and 9th distinct values (hand-worked)
     for (const s of [23, 0, 1]) {
       expect(half.lower[s]).toBe(100 + 2 * 0);
       expect(half.upper[s]).toBe(100 + 2 * 55.5);
     }
-    // slot 2 reaches slots 1..3 only: no errors there
-    expect(half.lower[2]).toBeNaN();
-    expect(half.upper[22]).toBeNaN();
-    const wide = band(pool, point, 2, 0.9);
-    expect(wide.lower[0]).toBeNaN();
-    expect(wide.upper[0]).toBeNaN(); // rank 12 of 11
+    for (const s of [11, 12, 13]) expect([half.lower[s], half.upper[s]]).toEqual([114, 114]);
+    // slot 6 has no error within an hour: its reach grows to ±6 hours and takes in both slots' 198 errors;
+    // ranks floor(199 · 0.25) = 49 (a seven) and ceil(199 · 0.75) = 150 (29.9, after 27 values below 7, 99 sevens and 18 more)
+    expect(half.lower[6]).toBe(114);
+    expect(half.upper[6]).toBeCloseTo(100 + 2 * 29.9, 12);
+    const wide = band(pool, point, 2, 0.98);
+    // 98 % of 99: ranks 1 and 99, the extremes
+    expect([wide.lower[0], wide.upper[0]]).toEqual([100 - 2 * 12.75, 100 + 2 * 88.1]);
   });
 
   it('gives NaN at 90 % while a slot and its neighbours hold fewer than 19 errors', () => {
@@ -78,13 +82,25 @@ describe('band(pool, point, scale, coverage)', () => {
   });
 
   it('reaches one hour either side for quarter-hour slots (±4 slots)', () => {
-    const pool = emptyPool(96, 100);
-    for (let k = 0; k < 3; k++) addResiduals(pool, [1, ...new Array(95).fill(NaN)], new Array(96).fill(0), 1);
+    const pool = emptyPool(96, 200);
+    pool.bySlot[0] = new Array(99).fill(1);
+    pool.bySlot[9] = new Array(99).fill(2);
     const { lower } = band(pool, new Float64Array(96), 1, 0.5);
-    expect(lower[4]).toBe(1);
-    expect(lower[92]).toBe(1);
-    expect(lower[5]).toBeNaN();
-    expect(lower[91]).toBeNaN();
+    expect(lower[4]).toBe(1); // slots 0..8
+    expect(lower[92]).toBe(1); // slots 88..95 and 0
+    expect(lower[5]).toBe(2); // slots 1..9
+  });
+
+  it('gives no band while the whole day holds too few errors, and the whole day\'s once a slot\'s neighbourhood holds too few', () => {
+    const pool = emptyPool(24, 200);
+    pool.bySlot[0] = new Array(10).fill(1);
+    pool.bySlot[12] = new Array(10).fill(3);
+    const half = band(pool, new Float64Array(24), 1, 0.5);
+    // 20 errors of the whole day at 50 %: ranks floor(21 · 0.25) = 5 and ceil(21 · 0.75) = 16
+    for (let s = 0; s < 24; s++) expect([half.lower[s], half.upper[s]]).toEqual([1, 3]);
+    // 90 % needs 19, 98 % needs 99: with 20, the 98 % band is unknown
+    expect(band(pool, new Float64Array(24), 1, 0.98).lower[0]).toBeNaN();
+    expect(band(pool, new Float64Array(24), 1, 0.9).lower[0]).toBe(1);
   });
 
   it('bands(pool, point, scale, coverages) gives each coverage the band band() gives it', () => {

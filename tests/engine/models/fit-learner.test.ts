@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { createModel, inputFrame, type Learner, type ModelOptions, type Series } from '../../../src/engine';
 import { trainingBlocks } from '../../../src/engine/models/blocks';
+import { scaleWindowFor } from '../../../src/engine/models/choose-setup';
 import { syntheticSeries } from '../../support/synthetic';
 
 const SMALL: ModelOptions = { seed: 4, network: { hiddenLayers: [6], learningRate: 0.05, momentum: 0.5, iterations: 15, ensemble: 2, checkEvery: 5, patience: 2 } };
@@ -23,7 +24,7 @@ describe('fitLearner: the holdout block takes part in no choice', () => {
   it.each(['linear', 'blend'])('%s: changing the holdout days\' prices leaves every choice and the tuning score as they were', (kind) => {
     const a = fitted(kind, series).state!;
     const holdout = a.holdout.days;
-    expect(holdout).toBe(trainingBlocks(160 - 56).holdout);
+    expect(holdout).toBe(trainingBlocks(160 - scaleWindowFor(56, 160)).holdout);
     const b = fitted(kind, newestDaysChanged(series, holdout)).state!;
     expect(b.linear.map((l) => l.lambda)).toEqual(a.linear.map((l) => l.lambda));
     expect(b.neuralWeight).toBe(a.neuralWeight);
@@ -44,6 +45,6 @@ describe('fitLearner: the holdout block takes part in no choice', () => {
   it('scores the tuning block in-sample for its choices: the chosen penalties are the best there', () => {
     const state = fitted('linear', series).state!;
     expect(state.tuning.mae).toBeLessThanOrEqual(state.tuning.maeNaiveWeek);
-    expect(state.tuning.days).toBe(trainingBlocks(160 - 56).tuning);
+    expect(state.tuning.days).toBe(trainingBlocks(160 - scaleWindowFor(56, 160)).tuning);
   });
 });

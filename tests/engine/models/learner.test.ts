@@ -52,8 +52,8 @@ describe('Learner (blend, neural, linear) in a backtest', () => {
   });
 
   it('refuses to train on too little history and to forecast without the drivers it needs', () => {
-    const short = syntheticSeries(60);
-    expect(() => createModel('linear', SMALL).fit(inputFrame(short))).toThrow(/training needs at least 56 usable days/);
+    const short = syntheticSeries(27);
+    expect(() => createModel('linear', SMALL).fit(inputFrame(short))).toThrow(/needs at least 28 days of price history; the data has 27/);
     const model = createModel('linear', SMALL) as Learner;
     const frame = inputFrame(series);
     model.fit({ ...frame, price: frame.price.slice(0, 120), days: frame.days.slice(0, 121), drivers: { load_forecast: frame.drivers.load_forecast.slice(0, 120) } });
