@@ -164,6 +164,11 @@ export function calibrateLear(view: DayFrame, settings: LearSettings = DEFAULT_L
 
 /** LEAR's forecast of the view's target day from a calibration (on an earlier or the same view). */
 export function predictLear(cal: LearCalibration, view: DayFrame): DayForecast {
+  return { point: learFromInputs(cal, learInputs(cal, view), view.days[view.price.length].date) };
+}
+
+/** The raw value of each design input of a calibration for the view's target day (what predictLear reads). */
+export function learInputs(cal: LearCalibration, view: DayFrame): Float64Array {
   const D = view.price.length;
   const date = view.days[D]?.date;
   if (date === undefined) throw new InputError('lear: the data holds no day after the last price to forecast');
@@ -171,13 +176,18 @@ export function predictLear(cal: LearCalibration, view: DayFrame): DayForecast {
     if (!view.drivers[d]) throw new InputError(`lear was calibrated with driver "${d}", which the data for ${date} lacks`);
   }
   const weekdayOf = weekdays(view);
-  const z = cal.design.inputs.map((input, u) => {
+  return Float64Array.from(cal.design.inputs, (input) => {
     const x = inputValue(view, input, D, weekdayOf);
     if (!Number.isFinite(x)) {
       throw new InputError(`lear needs ${input.source} of ${view.days[D - input.lag]?.date ?? `${input.lag} days before ${date}`} to forecast ${date}, and it is unknown`);
     }
-    return input.weekday ? x : toAsinh(x, cal.inputScales[u]);
+    return x;
   });
+}
+
+/** LEAR's point forecast from raw input values (learInputs), per period; `date` names the day in messages. */
+export function learFromInputs(cal: LearCalibration, values: Float64Array, date = 'the day'): Float64Array {
+  const z = cal.design.inputs.map((input, u) => (input.weekday ? values[u] : toAsinh(values[u], cal.inputScales[u])));
   const point = new Float64Array(cal.periods.length);
   cal.periods.forEach((period, h) => {
     let y = period.intercept;
@@ -185,7 +195,7 @@ export function predictLear(cal: LearCalibration, view: DayFrame): DayForecast {
     point[h] = fromAsinh(y, period.target);
     if (!Number.isFinite(point[h])) throw new InputError(`lear gave no finite forecast for ${date}, slot ${h + 1}: an input lies far outside the calibration window`);
   });
-  return { point };
+  return point;
 }
 
 /** The forecast for a view's target day, calibrated on that view: the pure one-call form. */

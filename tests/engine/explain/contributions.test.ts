@@ -26,6 +26,8 @@ describe('explainAhead(model, series, drivers, against): contributions add up (e
 
   it('forecastMean is the mean of the model\'s own forecast of the day; the reference is its forecast of D-1 from that day\'s inputs', () => {
     const { learner, series } = trained('blend');
+    // the blend's LEAR part is in play here, so the equality below covers its inputs too
+    expect(learner.state!.learWeight).toBeGreaterThan(0);
     const e = explainAhead(learner, series, ['load_forecast']);
     const frame = inputFrame(series);
     expect(e.day).toBe(frame.days[HISTORY_DAYS].date);

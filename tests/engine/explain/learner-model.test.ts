@@ -43,9 +43,9 @@ describe('groupedModelOf(model)', () => {
 
   it('explainAhead refuses a reference day without enough history before it', () => {
     const { learner, series } = trained('linear');
-    // keep only the last 60 days: D-7 then lacks the 56 days of its level scale
+    // keep only the level scale's window and 4 days more: D-7 then lacks days of its level scale
     const frame = inputFrame(series);
-    const cut = frame.days[HISTORY_DAYS - 60].start;
+    const cut = frame.days[HISTORY_DAYS - (learner.state!.setup.scaleWindow + 4)].start;
     const short = { ...series, times: series.times.slice(cut), price: series.price.slice(cut), drivers: { load_forecast: series.drivers.load_forecast.slice(cut) } };
     expect(() => explainAhead(learner, short, ['load_forecast'], 'd-7')).toThrow(/too little price history/);
     expect(() => explainAhead(learner, series, ['load_forecast'], 'd-3' as never)).toThrow(/against must be d-1 or d-7/);
