@@ -4,6 +4,7 @@ import { Learner, type LearnerState } from '../models/learner';
 import type { NetworkJson } from '../models/network';
 import { decodeFloats } from './base64-floats';
 import { fromStoredLear } from './lear-file';
+import { REPORTED_COVERAGES } from '../models/bands';
 import { MAX_MODEL_BYTES, MODEL_FORMAT, MODEL_VERSION, StoredModelSchema, type StoredModel } from './model-schema';
 
 /**
@@ -71,6 +72,7 @@ export function learnerFromStored(stored: StoredModel, source = 'the model'): Le
     return typeof cal === 'string' ? bad(cal) : cal;
   };
   if ((stored.neuralWeight + (stored.learWeight ?? 0)) > 1 + 1e-9) bad('the blend weights add up to more than 1');
+  if (stored.bandCoverage && stored.bandCoverage.length !== 1 + REPORTED_COVERAGES.length) bad('bandCoverage has the wrong number of levels');
   const driverStats: LearnerState['setup']['driverStats'] = Object.create(null);
   for (const d of stored.setup.driverStats) driverStats[d.name] = { mean: d.mean, sd: d.sd };
   const state: LearnerState = {
@@ -83,6 +85,7 @@ export function learnerFromStored(stored: StoredModel, source = 'the model'): Le
     neuralWeight: stored.neuralWeight,
     learWeight: stored.learWeight ?? 0,
     lear: lear(),
+    bandCoverage: stored.bandCoverage ? [...stored.bandCoverage] : undefined,
     residuals: {
       keep: stored.residuals.keep,
       bySlot: stored.residuals.bySlot.map((r, k) => {

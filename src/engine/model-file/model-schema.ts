@@ -60,6 +60,8 @@ export const StoredModelSchema = z.strictObject({
   /** weight of the LEAR part (absent in files saved before the blend had one) */
   learWeight: Finite.min(0).max(1).optional(),
   lear: StoredLearSchema.optional(),
+  /** coverages the bands are built at after adaptive updates (models/adaptive-coverage.ts) */
+  bandCoverage: z.array(Finite.gt(0).lt(1)).max(8).optional(),
   residuals: z.strictObject({ keep: z.number().int().min(1).max(1000), bySlot: z.array(Floats).max(96) }),
   tuning: BlockScoresSchema,
   holdout: BlockScoresSchema,

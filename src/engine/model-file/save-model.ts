@@ -42,6 +42,7 @@ export function toStoredModel(learner: Learner, meta: { name: string; zone: stri
     neuralWeight: state.neuralWeight,
     learWeight: state.learWeight,
     ...(state.lear ? { lear: toStoredLear(state.lear) } : {}),
+    ...(state.bandCoverage ? { bandCoverage: [...state.bandCoverage] } : {}),
     residuals: { keep: state.residuals.keep, bySlot: state.residuals.bySlot.map((r) => encodeFloats(r, 4)) },
     tuning: storedScores(state.tuning),
     holdout: storedScores(state.holdout),

@@ -48,9 +48,11 @@ export function addResiduals(pool: ResidualPool, actual: ArrayLike<number>, fore
  * errors with those of the clock slots within an hour of it; where that is
  * still too few for the widest coverage asked (99 errors for 98 %, after a
  * short history), the reach grows hour by hour up to the whole day, so a
- * band is given wherever the day's errors suffice.
+ * band is given wherever the day's errors suffice. `adjusted` (adaptive-
+ * coverage.ts) gives the coverage each band is built at, when it differs
+ * from the nominal one the pooling is sized for.
  */
-export function bands(pool: ResidualPool, point: Float64Array, scale: number, coverages: number[]): Band[] {
+export function bands(pool: ResidualPool, point: Float64Array, scale: number, coverages: number[], adjusted?: number[]): Band[] {
   const slots = point.length;
   const out = coverages.map((coverage) => ({ coverage, lower: new Float64Array(slots), upper: new Float64Array(slots) }));
   const hour = Math.max(1, Math.round(slots / 24));
@@ -71,11 +73,14 @@ export function bands(pool: ResidualPool, point: Float64Array, scale: number, co
     let i = 0;
     for (const k of near) for (const r of pool.bySlot[k] ?? []) errors[i++] = r;
     errors.sort();
-    for (const b of out) {
-      const { lo, hi } = conformalRanks(n, b.coverage);
-      b.lower[s] = lo >= 1 ? point[s] + scale * errors[lo - 1] : NaN;
-      b.upper[s] = hi <= n ? point[s] + scale * errors[hi - 1] : NaN;
-    }
+    out.forEach((b, i) => {
+      const at = adjusted?.[i] ?? b.coverage;
+      const { lo, hi } = conformalRanks(n, at);
+      // an adjusted coverage beyond what the errors resolve takes the extremes, once they suffice for the nominal one
+      const enough = n >= fewestErrors(Math.min(at, b.coverage));
+      b.lower[s] = lo >= 1 ? point[s] + scale * errors[lo - 1] : enough ? point[s] + scale * errors[0] : NaN;
+      b.upper[s] = hi <= n ? point[s] + scale * errors[hi - 1] : enough ? point[s] + scale * errors[n - 1] : NaN;
+    });
   }
   return out;
 }

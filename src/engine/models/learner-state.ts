@@ -36,6 +36,8 @@ export interface LearnerState {
   /** LEAR's newest calibration, where learWeight > 0 */
   lear?: LearCalibration;
   residuals: ResidualPool;
+  /** the coverage each band is built at after adaptive conformal updates (adaptive-coverage.ts), in the order [own, ...REPORTED_COVERAGES]; absent = nominal */
+  bandCoverage?: number[];
   /** scores on the block every choice was made on: in-sample for those choices */
   tuning: BlockScores;
   /** scores on the newest training days, which took part in no choice */

@@ -5,6 +5,8 @@ import { frameBefore, targetDay, type DayFrame } from '../series/day-frame';
 import { addResiduals, bands, REPORTED_COVERAGES } from './bands';
 import { mix3 } from './blend-weights';
 import { LEAR_REFRESH_DAYS, learOnAll, learPoint } from './lear-part';
+import { adaptCoverage, missedShare } from './adaptive-coverage';
+import { recentWeights, rememberDay, type PartsDay } from './recent-weights';
 import { ensemblePrice, fitLearner, MIN_HISTORY_DAYS } from './fit-learner';
 import type { LearnerState } from './learner-state';
 import { LearnerSettingsSchema, type LearnerSettings } from './learner-settings';
@@ -41,7 +43,9 @@ export class Learner implements DayAheadModel {
   private sums?: MemberSums[];
   private nets: ((x: Float64Array) => Float64Array)[] = [];
   /** forecasts this learner issued, by day index, until their errors join the band pool */
-  private readonly issued = new Map<number, { point: Float64Array; scale: number }>();
+  private readonly issued = new Map<number, Issued>();
+  /** the parts' forecasts and actual prices of the newest out-of-sample days (recent-weights.ts) */
+  private recent: PartsDay[] = [];
   /** day index of the networks' last warm start (or fit) */
   private lastWarm?: number;
   /** day index of LEAR's last calibration (or fit) */
@@ -84,15 +88,16 @@ export class Learner implements DayAheadModel {
     const f = this.featureCache().features(view, d);
     if (!f) throw new InputError(`cannot forecast ${view.days[d].date}: it needs ${historyNeeded(state.setup)} days of known prices before it`);
     this.catchUpErrors(view, d);
-    const point = this.pointForecast(f.x, f.scale, learPoint(state.lear, view));
-    const [own, ...reported] = bands(state.residuals, point, f.scale.scale, [this.settings.coverage, ...REPORTED_COVERAGES]);
+    const parts = this.partsOf(f.x, f.scale, learPoint(state.lear, view));
+    const point = this.combine(parts);
+    const [own, ...reported] = this.bandsAround(point, f.scale.scale);
     const { lower, upper } = own;
     // a damaged or hand-edited model, or inputs far outside anything trained on, can overflow sinh
     const infinite = (v: number) => v === Infinity || v === -Infinity;
     if (!point.every(Number.isFinite) || lower.some(infinite) || upper.some(infinite)) {
       throw new InputError(`model ${this.name} gave a forecast for ${view.days[d].date} that is not a finite number; its inputs or the stored model are far out of range`);
     }
-    this.issued.set(d, { point, scale: f.scale.scale });
+    this.issued.set(d, { point, parts, scale: f.scale.scale });
     return { point, lower, upper, bands: reported };
   }
 
@@ -162,12 +167,41 @@ export class Learner implements DayAheadModel {
       let issued = this.issued.get(k);
       if (!issued && !this.inputProblem(view, k)) {
         const f = this.featureCache().features(view, k);
-        if (f) issued = { point: this.pointForecast(f.x, f.scale, learPoint(state.lear, frameBefore(view, k))), scale: f.scale.scale };
+        if (f) {
+          const parts = this.partsOf(f.x, f.scale, learPoint(state.lear, frameBefore(view, k)));
+          issued = { point: this.combine(parts), parts, scale: f.scale.scale };
+        }
       }
-      if (issued) addResiduals(state.residuals, view.price[k], issued.point, issued.scale);
+      if (!issued) continue;
+      this.adaptBands(view.price[k], issued);
+      addResiduals(state.residuals, view.price[k], issued.point, issued.scale);
+      rememberDay(this.recent, { actual: view.price[k], ...issued.parts });
+    }
+    if (this.settings.kind === 'blend') {
+      const w = recentWeights(this.recent, { neural: state.neuralWeight, lear: state.learWeight });
+      if (w) { state.neuralWeight = w.neural; state.learWeight = w.lear; }
     }
     if (d > 0 && view.days[d - 1].date > state.residualsThrough) state.residualsThrough = view.days[d - 1].date;
     for (const day of this.issued.keys()) if (day < d) this.issued.delete(day);
+  }
+
+  /** The bands around a point forecast, own coverage first, then REPORTED_COVERAGES, each at its adapted coverage. */
+  private bandsAround(point: Float64Array, scale: number) {
+    const state = this.fitted();
+    return bands(state.residuals, point, scale, this.nominalCoverages(), state.bandCoverage);
+  }
+
+  private nominalCoverages(): number[] {
+    return [this.settings.coverage, ...REPORTED_COVERAGES];
+  }
+
+  /** Adaptive conformal step: each band's coverage moves by how many of the day's prices its band (as it stood) missed. */
+  private adaptBands(actual: ArrayLike<number>, issued: Issued): void {
+    const state = this.fitted();
+    const nominal = this.nominalCoverages();
+    const current = state.bandCoverage ?? nominal;
+    const built = this.bandsAround(issued.point, issued.scale);
+    state.bandCoverage = nominal.map((c, i) => adaptCoverage(c, current[i], missedShare(actual, built[i].lower, built[i].upper)));
   }
 
   /** The feature vector and level scale of day `d` of `view` (undefined when an input is unknown). */
@@ -186,18 +220,23 @@ export class Learner implements DayAheadModel {
    * LEAR's part its weight goes to the linear part.
    */
   forecastFromFeatures(x: Float64Array, scale: LevelScale, lear?: Float64Array): Float64Array {
-    return this.pointForecast(x, scale, lear);
+    return this.combine(this.partsOf(x, scale, lear));
   }
 
-  private pointForecast(x: Float64Array, scale: LevelScale, lear: Float64Array | undefined): Float64Array {
+  /** Each part's forecast in price units, held inside the (widened) range of scaled prices seen in training. */
+  private partsOf(x: Float64Array, scale: LevelScale, lear: Float64Array | undefined): Parts {
     const state = this.fitted();
     const m = state.targetRange.lo.length;
-    // held inside the (widened) range of scaled prices seen in training
-    const lin = linearPrice(state.linear, state.standardiser, x, m, scale, state.targetRange);
-    const nn = this.nets.length ? [ensemblePrice(this.nets, state.standardiser, state.targetRange, x, scale)] : [];
+    const linear = linearPrice(state.linear, state.standardiser, x, m, scale, state.targetRange);
+    const neural = this.nets.length ? ensemblePrice(this.nets, state.standardiser, state.targetRange, x, scale) : undefined;
     // LEAR's part is held inside the same range as the others, so the blend never leaves it
     const held = lear?.map((v, c) => Math.min(fromScaled(state.targetRange.hi[c], scale), Math.max(fromScaled(state.targetRange.lo[c], scale), v)));
-    return mix3(nn, [lin], held ? [held] : [], state.neuralWeight, held ? state.learWeight : 0)[0];
+    return { neural, linear, ...(held ? { lear: held } : {}) };
+  }
+
+  private combine(p: Parts): Float64Array {
+    const state = this.fitted();
+    return mix3(p.neural ? [p.neural] : [], [p.linear], p.lear ? [p.lear] : [], state.neuralWeight, p.lear ? state.learWeight : 0)[0];
   }
 
   /** The linear model's running sums; after loading a stored model they are rebuilt from the history. */
@@ -228,8 +267,12 @@ export class Learner implements DayAheadModel {
     this.sums = sums;
     this.nets = this.settings.kind === 'linear' ? [] : state.networks.map(loadNetwork);
     this.issued.clear();
+    this.recent = [];
   }
 }
+
+type Parts = Omit<PartsDay, 'actual'>;
+interface Issued { point: Float64Array; parts: Parts; scale: number }
 
 /** Index of the first day of `view` after `date`. */
 function firstDayAfter(view: DayFrame, date: string): number {
