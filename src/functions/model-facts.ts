@@ -14,9 +14,9 @@ import { isOmitted, textArg } from './cells';
  */
 export const MODEL_FIELDS = [
   'name', 'kind', 'trained_range', 'trained_from', 'trained_to', 'resolution', 'zone', 'features', 'drivers', 'region',
-  'validation_days', 'validation_mae', 'validation_mae_linear', 'validation_mae_neural', 'validation_mae_naive_week',
+  'validation_days', 'validation_mae', 'validation_mae_linear', 'validation_mae_neural', 'validation_mae_lear', 'validation_mae_naive_week',
   'tuning_days', 'tuning_mae',
-  'neural_weight', 'coverage', 'networks', 'hidden_layers', 'created',
+  'neural_weight', 'lear_weight', 'coverage', 'networks', 'hidden_layers', 'created',
 ] as const;
 
 type Field = (typeof MODEL_FIELDS)[number];
@@ -49,10 +49,12 @@ function factsOf(m: StoredModel): Record<Field, string | number> {
     validation_mae: num(v.mae),
     validation_mae_linear: num(v.maeLinear),
     validation_mae_neural: num(v.maeNeural),
+    validation_mae_lear: num(v.maeLear ?? null),
     validation_mae_naive_week: num(v.maeNaiveWeek),
     tuning_days: m.tuning.days,
     tuning_mae: num(m.tuning.mae),
     neural_weight: m.neuralWeight,
+    lear_weight: m.learWeight ?? 0,
     coverage: m.settings.coverage,
     networks: m.networks.length,
     hidden_layers: m.settings.kind === 'linear' ? '' : m.settings.network.hiddenLayers.join(', '),

@@ -49,16 +49,16 @@ export async function trainCommand(flags: TrainFlags): Promise<void> {
   const summary = {
     model: stored.settings.kind, saved: flags.save, kilobytes: Math.round(text.length / 102.4) / 10,
     trained_from: stored.trainedFrom, trained_to: stored.trainedTo, validation_days: v.days,
-    validation_mae: v.mae, validation_mae_linear: v.maeLinear, validation_mae_neural: v.maeNeural,
-    validation_mae_naive_week: v.maeNaiveWeek, tuning_days: t.days, tuning_mae: t.mae, neural_weight: stored.neuralWeight, linear_members: stored.linear.map((l) => ({ window: l.window, lambda: l.lambda })),
+    validation_mae: v.mae, validation_mae_linear: v.maeLinear, validation_mae_neural: v.maeNeural, validation_mae_lear: v.maeLear ?? null,
+    validation_mae_naive_week: v.maeNaiveWeek, tuning_days: t.days, tuning_mae: t.mae, neural_weight: stored.neuralWeight, lear_weight: stored.learWeight ?? 0, linear_members: stored.linear.map((l) => ({ window: l.window, lambda: l.lambda })),
     importance: stored.importance, notes: stored.notes, seconds: (Date.now() - started) / 1000,
   };
   if (flags.json) { process.stdout.write(`${JSON.stringify(summary)}\n`); return; }
   const f = (x: number | null) => (x === null || !Number.isFinite(x) ? 'n/a' : x.toFixed(3));
   process.stdout.write(
     `Saved ${stored.settings.kind} model to ${flags.save} (${summary.kilobytes} KB), trained on ${stored.trainedFrom} to ${stored.trainedTo} in ${summary.seconds.toFixed(1)} s.\n` +
-    `Validation on the last ${v.days} training days, which took part in no choice: MAE ${f(v.mae)} (linear ${f(v.maeLinear)}, neural ${f(v.maeNeural)}, naive-week ${f(v.maeNaiveWeek)}).\n` +
-    `Tuning block (${t.days} days before those; penalties, early stopping and the neural weight ${stored.neuralWeight} were chosen on it): MAE ${f(t.mae)}.\n` +
+    `Validation on the last ${v.days} training days, which took part in no choice: MAE ${f(v.mae)} (linear ${f(v.maeLinear)}, neural ${f(v.maeNeural)}, lear ${f(v.maeLear ?? null)}, naive-week ${f(v.maeNaiveWeek)}).\n` +
+    `Tuning block (${t.days} days before those; penalties, early stopping and the blend weights (neural ${stored.neuralWeight}, lear ${stored.learWeight ?? 0}) were chosen on it): MAE ${f(t.mae)}.\n` +
     `Inputs by importance (validation MAE rise when a group is shuffled): ${stored.importance.map((i) => `${i.group} ${i.increase >= 0 ? '+' : ''}${i.increase.toFixed(2)}`).join(', ')}\n`,
   );
   for (const note of stored.notes) process.stdout.write(`Note: ${note}\n`);
