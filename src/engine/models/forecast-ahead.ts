@@ -5,6 +5,7 @@ import { inputFrame } from '../series/input-frame';
 import { addDays } from '../calendar/weekday';
 import { dayStartUtc } from '../series/local-clock';
 import type { Series } from '../series/series';
+import type { DayFrame } from '../series/day-frame';
 import type { DayAheadModel } from './model';
 
 export interface AheadRow {
@@ -24,8 +25,7 @@ export interface AheadRow {
  * @throws InputError when the next day's driver rows are missing
  */
 export function forecastAhead(model: DayAheadModel, series: Series, drivers: string[]): { rows: AheadRow[]; days: string[]; notes: string[] } {
-  const full = drivers.length === 0 ? withNextDay(series) : series;
-  const frame = inputFrame(full);
+  const { full, frame } = framed(series, drivers.length === 0);
   const first = frame.price.length;
   if (first === 0) throw new InputError('there is no known price to forecast from');
   const lastKnown = frame.days[first - 1].date;
@@ -62,6 +62,26 @@ export function forecastAhead(model: DayAheadModel, series: Series, drivers: str
   }
   if (days.length > 1) notes.push(`${days.slice(1).join(', ')} use the forecasts of the days before them as their price history`);
   return { rows, days, notes };
+}
+
+/**
+ * The series' input frame (with the next day's empty rows added for a model
+ * without drivers), built once per series object: cells that forecast from
+ * the same ranges share it (functions/range-cache.ts hands them one series).
+ * Each caller gets its own `price` list, which the forecast extends.
+ */
+const frames = new WeakMap<Series, { plain?: { full: Series; frame: DayFrame }; withNext?: { full: Series; frame: DayFrame } }>();
+
+function framed(series: Series, addNextDay: boolean): { full: Series; frame: DayFrame } {
+  let memo = frames.get(series);
+  if (!memo) frames.set(series, (memo = {}));
+  const which = addNextDay ? 'withNext' : 'plain';
+  if (!memo[which]) {
+    const full = addNextDay ? withNextDay(series) : series;
+    memo[which] = { full, frame: inputFrame(full) };
+  }
+  const { full, frame } = memo[which]!;
+  return { full, frame: { ...frame, price: frame.price.slice() } };
 }
 
 /** The series with empty rows for the local day after its last period's day (for models without drivers). */
