@@ -1,5 +1,5 @@
 import {
-  forecastAhead, InputError, learnerFromStored, toWallClock,
+  forecastAhead, InputError, Learner, learnerFromStored, toWallClock,
   type AheadRow, type StoredModel,
 } from '../engine';
 import { isOmitted } from './cells';
@@ -18,7 +18,8 @@ import type { DateSystem } from './timestamps';
  * order in which the host recalculates cells. What a sheet of such cells
  * repeats is computed once: the series of the same ranges (range-cache.ts)
  * and the forecast of one model on one series at one coverage, kept with the
- * loaded model (a saved, replaced or deleted model is a new object).
+ * loaded model (a saved, replaced or deleted model is a new object), whose
+ * decoded form is kept too (freshLearner).
  *
  * @param coverage band coverage in (0.5, 1); the model's own when omitted
  * @throws InputError for ranges the model cannot use, with what to fix
@@ -41,9 +42,7 @@ export function nextDay(stored: StoredModel, args: RangeArgs, options: { dateSys
   if (!forecasts) computed.set(stored, (forecasts = new Map()));
   const hit = forecasts.get(key);
   if (hit) return hit;
-  const settings = coverage === undefined ? stored : { ...stored, settings: { ...stored.settings, coverage } };
-  const learner = learnerFromStored(settings, source);
-  const { rows, days } = forecastAhead(learner, series, drivers);
+  const { rows, days } = forecastAhead(freshLearner(stored, source, coverage), series, drivers);
   const day = days[0];
   const result = { day, rows: rows.filter((r) => toWallClock(r.time, stored.zone).date === day) };
   forecasts.set(key, result);
@@ -53,4 +52,19 @@ export function nextDay(stored: StoredModel, args: RangeArgs, options: { dateSys
 }
 
 const MAX_FORECASTS = 64;
+
+/**
+ * A fresh learner of the stored model: the model is decoded once per loaded
+ * model (learnerFromStored: checks, unpacking) and each learner gets its own
+ * band pool (the only part a forecast changes), sharing the rest.
+ */
+const decoded = new WeakMap<StoredModel, Learner>();
+
+function freshLearner(stored: StoredModel, source: string, coverage: number | undefined): Learner {
+  let template = decoded.get(stored);
+  if (!template) decoded.set(stored, (template = learnerFromStored(stored, source)));
+  const state = template.state!;
+  const residuals = { keep: state.residuals.keep, bySlot: state.residuals.bySlot.map((r) => r.slice()) };
+  return new Learner(coverage === undefined ? template.settings : { ...template.settings, coverage }, { ...state, residuals });
+}
 const computed = new WeakMap<StoredModel, Map<string, { day: string; rows: AheadRow[] }>>();
