@@ -8,6 +8,8 @@ export default defineConfig({
   test: {
     include: ['tests/**/*.test.ts'],
     environment: 'node',
+    // the child-process CLI tests run the compiled command line, built fresh
+    globalSetup: ['tests/support/build-cli-once.ts'],
     testTimeout: 60_000,
   },
 });

@@ -49,11 +49,33 @@ export const resolveOptions = {
   fallback: { crypto: false },
 };
 
+/**
+ * The holiday rules, one chunk per country: the calendar's chunk list
+ * (src/engine/calendar/holiday-chunks.ts) is written by
+ * scripts/holiday-chunks-loader.cjs, date-holidays' own data module (every
+ * country, about 800 KB) becomes an empty rule set that the chunks fill
+ * (src/engine/calendar/holiday-data.browser.ts), and the package's class is
+ * loaded lazily (src/engine/calendar/holiday-parser.browser.ts).
+ */
+const HOLIDAY_CHUNKS = from('src/engine/calendar/holiday-chunks.ts');
+export const holidaySwaps = () => [
+  new webpack.NormalModuleReplacementPlugin(/date-holidays[\\/]src[\\/]data\.js$/, from('src/engine/calendar/holiday-data.browser.ts')),
+  // the class that reads the rules (with its calendars and zone tables) comes as a lazy chunk too
+  new webpack.NormalModuleReplacementPlugin(/calendar[\\/]holiday-parser\.ts$/, from('src/engine/calendar/holiday-parser.browser.ts')),
+  // its time-zone calls go to luxon, the engine's own date-time library, instead of moment-timezone
+  new webpack.NormalModuleReplacementPlugin(/^moment-timezone$/, from('src/engine/calendar/moment-timezone.browser.ts')),
+  // astronomia's planet tables: the equinox rules need only the Earth's (date-holidays' README, "Bundling with webpack")
+  new webpack.IgnorePlugin({
+    checkResource: (resource, context) => /[\\/]astronomia[\\/]data$/.test(context) && !['./deltat.js', './vsop87Bearth.js'].includes(resource),
+  }),
+];
+
 /** The rules that compile our TypeScript (type checking is `npm run typecheck`). */
 export const moduleRules = [
+  { test: HOLIDAY_CHUNKS, use: from('scripts/holiday-chunks-loader.cjs'), type: 'javascript/auto' },
   {
     test: /\.ts$/,
-    exclude: /node_modules/,
+    exclude: [/node_modules/, HOLIDAY_CHUNKS],
     use: { loader: 'ts-loader', options: { configFile: from('tsconfig.json'), transpileOnly: true, onlyCompileBundledFiles: true } },
   },
 ];
@@ -119,6 +141,7 @@ export default async function config(env = {}, argv = {}) {
     performance: { hints: false },
     plugins: [
       new CustomFunctionsMetadataPlugin({ output: 'functions.json', input: FUNCTIONS_SOURCE }),
+      ...holidaySwaps(),
       ...html,
       new CopyWebpackPlugin({ patterns: [...officeCopies(), { from: from('manifest.xml'), to: 'manifest.xml', transform: (text) => manifestFor(text.toString(), ports.addin) }] }),
       new IconPlugin(),

@@ -1,5 +1,6 @@
 import { baselineModel, forecastAhead, InputError, toWallClock, type BaselineKind } from '../engine';
 import { textArg } from './cells';
+import { cachedSeries } from './range-cache';
 import { seriesFromRanges } from './ranges-to-series';
 import type { DateSystem } from './timestamps';
 
@@ -31,7 +32,8 @@ export function baseline(times: unknown, prices: unknown, kind: unknown, zone: u
   const model = KINDS[name];
   if (!model) throw new InputError(`kind "${name}" is not a baseline; use "day", "week" or "weekday-rule"`);
   const z = textArg(zone, 'zone', DEFAULT_ZONE);
-  const { series } = seriesFromRanges({ times, prices }, { zone: z, dateSystem: options.dateSystem });
+  const args = { times, prices }, seriesOptions = { zone: z, dateSystem: options.dateSystem };
+  const { series } = cachedSeries(args, seriesOptions, () => seriesFromRanges(args, seriesOptions));
   const { rows, days } = forecastAhead(baselineModel(model), series, []);
   const day = days[0];
   const mine = rows.filter((r) => toWallClock(r.time, z).date === day);

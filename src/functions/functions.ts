@@ -1,6 +1,6 @@
 // Range arguments are `any[][]` on purpose: a `number[][]` one would turn empty cells into 0 (cells.ts).
 import './runtime-shim';
-import type { StoredModel } from '../engine';
+import { prepareHolidays, type StoredModel } from '../engine';
 import { boundModelStore, currentModelStore } from '../host/model-store';
 import type { WorkbookPort } from '../host/workbook-port';
 import { ahead as aheadCore } from './ahead';
@@ -106,7 +106,10 @@ export async function compare(actual: any[][], forecastA: any[][], forecastB: an
  * @returns The holiday's name, or empty text.
  */
 export async function holiday(date: any, region: string): Promise<string> {
-  return guarded(async () => holidayCore(date, region, { dateSystem: await dateSystem() }));
+  return guarded(async () => {
+    await prepareHolidays(region); // the region's rules load on first use in the add-in
+    return holidayCore(date, region, { dateSystem: await dateSystem() });
+  });
 }
 
 /**

@@ -1,5 +1,6 @@
 import { buildSeries, checkZone, InputError, type IngestReport, type Series, type Table } from '../engine';
 import { cellGrid, cellList, isBlank, isOmitted, numberText } from './cells';
+import { ContentCache } from './range-cache';
 import { readTimes, type DateSystem } from './timestamps';
 
 /**
@@ -50,7 +51,7 @@ export function seriesFromRanges(args: RangeArgs, options: SeriesOptions): { ser
   }
   const titled = isTitle(timeCells[0]) && isTitle(priceCells[0]);
   const skip = titled ? 1 : 0;
-  const times = [...new Array<undefined>(skip), ...readTimes(timeCells.slice(skip), zone, 'times', dateSystem, 1 + skip)];
+  const times = [...new Array<undefined>(skip), ...cachedTimes(timeCells.slice(skip), zone, 'times', dateSystem, 1 + skip)];
   const rows = new Map<number, Row>();
   const firstRow = new Map<number, number>();
   times.forEach((t, i) => {
@@ -104,7 +105,7 @@ function addDrivers(rows: Map<number, Row>, times: (number | undefined)[], title
     if (cells.length !== grid.length) {
       throw new InputError(`driverTimes has ${cells.length} cells but drivers has ${grid.length} rows of values; give ranges of the same height`);
     }
-    driverTimes = readTimes(cells, zone, 'driverTimes', dateSystem);
+    driverTimes = cachedTimes(cells, zone, 'driverTimes', dateSystem, 1);
   }
   const seen = new Map<number, number>();
   const offset = header ? 2 : 1;
@@ -137,4 +138,15 @@ function duplicate(what: string, first: number, second: number): InputError {
 /** A column title: text that cannot be a number, a date or a timestamp (those start with a digit, a sign or a point). */
 function isTitle(v: unknown): boolean {
   return typeof v === 'string' && !isBlank(v) && !/^[+-]?[\d.]/.test(v.trim());
+}
+
+/**
+ * Timestamps read from a range, kept for the next call with the same cells
+ * (range-cache.ts): reading them through the zone's clock is the costly part
+ * of a call, and a price edit leaves them as they were.
+ */
+const timesCache = new ContentCache<(number | undefined)[]>(8);
+
+function cachedTimes(cells: unknown[], zone: string, what: string, dateSystem: DateSystem, firstRow: number): (number | undefined)[] {
+  return timesCache.get([zone, what, dateSystem, firstRow, ...cells], () => readTimes(cells, zone, what, dateSystem, firstRow)).value;
 }

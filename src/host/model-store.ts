@@ -1,5 +1,5 @@
 import {
-  InputError, learnerFromStored, parseStoredModel, storedModelText, toStoredModel,
+  InputError, learnerFromStored, parseStoredModel, prepareHolidays, storedModelText, toStoredModel,
   type Learner, type Resolution, type StoredModel,
 } from '../engine';
 import type { WorkbookPort } from './workbook-port';
@@ -62,9 +62,11 @@ export class ModelStore {
     const cache = this.cache();
     let hit = cache.get(name);
     if (!hit) {
-      hit = this.port.loadModels().then((texts) => {
+      hit = this.port.loadModels().then(async (texts) => {
         if (!Object.prototype.hasOwnProperty.call(texts, name)) throw new InputError(missing(name, Object.keys(texts)));
-        return { name, ...check(name, texts[name]) };
+        const loaded = { name, ...check(name, texts[name]) };
+        await prepareHolidays(loaded.stored.setup.region); // its holiday features need the region's rules
+        return loaded;
       });
       cache.set(name, hit);
       hit.catch(() => cache.delete(name));
@@ -119,6 +121,7 @@ export class ModelStore {
       throw new InputError(`a model named "${stored.name}" is already saved in this workbook; choose another name or replace it`);
     }
     await this.port.saveModel(stored.name, text);
+    await prepareHolidays(stored.setup.region);
     const loaded: LoadedModel = { name: stored.name, stored: checked.stored, learner: learner ?? checked.learner };
     this.cache().set(stored.name, Promise.resolve(loaded));
     if (recalculate) await this.recalculate();

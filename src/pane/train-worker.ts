@@ -1,4 +1,5 @@
 /// <reference lib="webworker" />
+import { prepareHolidays } from '../engine';
 import type { Job, Reply } from './jobs/protocol';
 import { runJob } from './jobs/run-job';
 
@@ -11,5 +12,10 @@ import { runJob } from './jobs/run-job';
 const scope = self as unknown as { onmessage: ((event: MessageEvent<Job>) => void) | null; postMessage(reply: Reply): void };
 
 scope.onmessage = (event) => {
-  runJob(event.data, (reply) => scope.postMessage(reply));
+  const post = (reply: Reply) => scope.postMessage(reply);
+  // the holiday rules of the job's region load first (one chunk per country in the browser build)
+  prepareHolidays(event.data.settings?.region).then(
+    () => runJob(event.data, post),
+    (error) => post({ type: 'failed', message: `the holiday rules could not be loaded: ${error instanceof Error ? error.message : String(error)}` }),
+  );
 };

@@ -158,6 +158,24 @@ function readable(err: unknown, loomNames: string[]): InstanceType<typeof Formul
  * cell, so it can take part in arithmetic). An error never escapes as an
  * exception: it is returned as the error value, so IFERROR can catch it.
  */
+/**
+ * A range's values as a cell function gets them (empty as null), or the
+ * first error value in it. The evaluator hands every formula that reads the
+ * same range of written values one grid (formula-eval.ts), so the result is
+ * kept per grid and the functions see the same arrays again (range-cache.ts
+ * then finds its entry by their identity).
+ */
+const converted = new WeakMap<unknown[][], CellValue[][] | InstanceType<typeof FormulaError>>();
+
+function asCells(grid: unknown[][]): CellValue[][] | InstanceType<typeof FormulaError> {
+  const hit = converted.get(grid);
+  if (hit) return hit;
+  const error = grid.flat().find((v) => v instanceof FormulaError) as InstanceType<typeof FormulaError> | undefined;
+  const out = error ?? grid.map((row) => row.map((v) => (v === undefined ? null : v) as CellValue));
+  converted.set(grid, out);
+  return out;
+}
+
 async function callLoom(name: string, fn: LoomFunction, args: FunctionArg[], toFailure: ToFailure, toGrid: (r: unknown, n: string) => CellValue[][]): Promise<unknown> {
   const fail = (code: string, message: string) => new FormulaError(code, message);
   if (args.length > fn.params.length) return fail('#VALUE!', `LOOM.${name} takes at most ${fn.params.length} argument${fn.params.length === 1 ? '' : 's'}, got ${args.length}`);
@@ -170,9 +188,9 @@ async function callLoom(name: string, fn: LoomFunction, args: FunctionArg[], toF
       continue;
     }
     const grid = Array.isArray(arg.value) ? (arg.value as unknown[][]) : [[arg.value]];
-    const error = grid.flat().find((v) => v instanceof FormulaError);
-    if (error) return error;
-    const cells = grid.map((row) => row.map((v) => (v === undefined ? null : v)));
+    const converted = asCells(grid);
+    if (converted instanceof FormulaError) return converted;
+    const cells = converted;
     if (fn.params[i] === 'matrix') { values.push(cells); continue; }
     if (cells.length !== 1 || cells[0].length !== 1) return fail('#VALUE!', `argument ${i + 1} of LOOM.${name} must be one cell or value, not ${cells.length} × ${cells[0].length} cells`);
     values.push(cells[0][0]);

@@ -206,6 +206,12 @@ export async function calculate(source: CellSource, functions: Record<string, Lo
     }
   };
 
+  // Ranges of written values only (no formula, spill or error in them), read once per recalculation
+  // and sheet version and handed to every formula that reads the same range: a sheet of LOOM cells
+  // repeats the same history ranges, thousands of cells each. The functions never change their arguments.
+  const valueRanges = new Map<string, { version: number; grid: unknown[][] }>();
+  let readFormulaOrSpill = false;
+
   /** The cells as one formula reads them: written values, formula results, spilled values; errors as error values. */
   const reader = (at: FormulaCell, stack: Set<string>, trace: Trace): CellReader => {
     const handlesErrors = HANDLES_ERRORS.test(at.formula);
@@ -222,6 +228,7 @@ export async function calculate(source: CellSource, functions: Record<string, Lo
       const raw = source.raw(sheet, r, c);
       if (typeof raw === 'string' && raw.startsWith('=')) {
         trace.pure = false;
+        readFormulaOrSpill = true;
         const k = key(sheet, r, c);
         const done = results.get(k);
         const where = formatA1({ sheet, row: r, column: c, rows: 1, columns: 1 });
@@ -235,7 +242,7 @@ export async function calculate(source: CellSource, functions: Record<string, Lo
       }
       if (raw === undefined) {
         const spilled = spills.get(key(sheet, r, c));
-        if (spilled !== undefined) trace.pure = false;
+        if (spilled !== undefined) { trace.pure = false; readFormulaOrSpill = true; }
         return spilled ?? null;
       }
       return raw;
@@ -252,9 +259,15 @@ export async function calculate(source: CellSource, functions: Record<string, Lo
       range: (ref) => {
         const sheet = sheetOf(ref.sheet);
         if (ref.rows * ref.columns > MAX_CELLS) throw new FormulaError('#VALUE!', `a reference of ${ref.rows * ref.columns} cells is more than the preview reads (${MAX_CELLS}); name the rows`);
+        const memoKey = `${sheet.toLowerCase()}|${ref.row}|${ref.column}|${ref.rows}|${ref.columns}`;
+        const version = source.version?.(sheet);
+        const memo = valueRanges.get(memoKey);
+        if (memo && version !== undefined && memo.version === version) return memo.grid;
+        readFormulaOrSpill = false;
         const grid = Array.from({ length: ref.rows }, (_, i) => Array.from({ length: ref.columns }, (_, j) => value(sheet, ref.row + i, ref.column + j)));
         const error = grid.flat().find((v) => v instanceof FormulaError);
         if (error && !handlesErrors) throw error;
+        if (!error && !readFormulaOrSpill && version !== undefined) valueRanges.set(memoKey, { version, grid });
         return grid;
       },
     };

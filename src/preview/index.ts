@@ -12,7 +12,7 @@
  * kept in this origin's localStorage (the preview's "workbook file").
  */
 import '../pane/strict-csp'; // first: before any schema is built (see strict-csp.ts)
-import { addDays, dayStartUtc } from '../engine';
+import { addDays, dayStartUtc, DEMO_MARKET, prepareHolidays } from '../engine';
 import { formatA1 } from '../host/a1';
 import { detectHost, hostErrorMessage } from '../host/host-detect';
 import { bindWorkbook } from '../host/model-store';
@@ -47,9 +47,10 @@ function linkStyles(): void {
   document.head.appendChild(link);
 }
 
-function boot(): void {
+async function boot(): Promise<void> {
   const root = document.getElementById(ROOT_ID);
   if (!root) return;
+  await prepareHolidays(DEMO_MARKET.region); // the demo market's calendar (one chunk in the browser build)
   quietHostTelemetry();
   completeCustomFunctions();
   linkStyles();
@@ -154,7 +155,7 @@ function boot(): void {
   root.setAttribute('data-ready', 'true');
 }
 
-boot();
+void boot();
 
 /**
  * A clock that runs from 10:00 market time of the day before `tomorrow`

@@ -5,6 +5,7 @@ import { fileURLToPath, pathToFileURL } from 'node:url';
 import vm from 'node:vm';
 import webpack from 'webpack';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { addDays, holidaysOfYear } from '../../src/engine';
 import { baseline } from '../../src/functions/baseline';
 import { column, serials, syntheticMarket } from '../functions/synthetic';
 
@@ -103,10 +104,27 @@ describe('the build (webpack.config.js)', () => {
 
   it('the functions bundle registers every LOOM function and they compute without code generation from strings', async () => {
     const associated = new Map<string, (...args: unknown[]) => Promise<unknown>>();
+    const loadedChunks: string[] = [];
     class CellError extends Error { constructor(readonly code: string, message?: string) { super(message); } }
     const context = strictContext({
-      // webpack's automatic public path reads the running script's address
-      document: { baseURI: 'https://localhost:3000/taskpane.html', currentScript: { tagName: 'SCRIPT', src: 'https://localhost:3000/functions.js' }, getElementsByTagName: () => [] },
+      // webpack's automatic public path reads the running script's address; a lazy chunk
+      // (a country's holiday rules, the rule reader) arrives as a script element added to the head
+      document: {
+        baseURI: 'https://localhost:3000/taskpane.html',
+        currentScript: { tagName: 'SCRIPT', src: 'https://localhost:3000/functions.js' },
+        getElementsByTagName: () => [],
+        createElement: () => ({ setAttribute() {}, getAttribute: () => null }),
+        head: { appendChild: (script: { src: string; onload?: (e: unknown) => void; onerror?: (e: unknown) => void }) => setTimeout(() => {
+          const file = new URL(script.src).pathname.slice(1);
+          try {
+            vm.runInContext(readFileSync(join(out, file), 'utf8'), context, { filename: file });
+            loadedChunks.push(file);
+            script.onload?.({ type: 'load', target: script });
+          } catch (err) {
+            script.onerror?.({ type: 'error', target: script, err });
+          }
+        }) },
+      },
       CustomFunctions: {
         associate: (id: string, fn: (...args: unknown[]) => Promise<unknown>) => associated.set(id, fn),
         Error: CellError,
@@ -119,6 +137,26 @@ describe('the build (webpack.config.js)', () => {
     expect([...associated.keys()].sort()).toEqual(['AHEAD', 'BAND', 'BASELINE', 'COMPARE', 'EXPLAIN', 'HOLIDAY', 'MODEL', 'SCORE']);
 
     expect(await associated.get('HOLIDAY')!(45933, 'DE')).toBe('Tag der Deutschen Einheit');
+    // each region's rules arrive as their own chunk, read by the browser build's rule reader (its
+    // time-zone calls on luxon, not moment-timezone): the same holidays as the engine in Node, which
+    // reads the package whole with moment-timezone. Regions with equinox (JP), Chinese (CN, KR),
+    // Hebrew (IL), Islamic (EG) calendar rules, one whose rules refer to another's (GU → US), a state.
+    expect(loadedChunks.some((f) => f.startsWith('holidays-DE'))).toBe(true);
+    for (const region of ['DE-BY', 'JP', 'CN', 'KR', 'IL', 'EG', 'GU', 'US-CA', 'AU-SA', 'BR', 'FR', 'GB']) {
+      for (const year of [2025, 2026]) {
+        const node = holidaysOfYear(year, region);
+        const got: [string, string][] = [];
+        for (let day = 0; day < 365; day++) {
+          const date = addDays(`${year}-01-01`, day);
+          const name = await associated.get('HOLIDAY')!(date, region);
+          if (name) got.push([date, name as string]);
+        }
+        expect(got, `${region} ${year}`).toEqual([...node]);
+      }
+    }
+    // one chunk per country asked for, and none for US: GU's chunk brought its rules along
+    expect(loadedChunks.filter((f) => f.startsWith('holidays-')).map((f) => f.slice(9, 11)).sort()).toEqual(['AU', 'BR', 'CN', 'DE', 'EG', 'FR', 'GB', 'GU', 'IL', 'JP', 'KR']);
+    expect(loadedChunks.some((f) => f.startsWith('moment'))).toBe(false);
     expect(await associated.get('SCORE')!([[10], [20]], [[12], [17]], null, null)).toBe(2.5);
     const m = syntheticMarket('2025-01-01', 20);
     const bundled = await associated.get('BASELINE')!(column(serials(m)), column(m.price), 'week', null);

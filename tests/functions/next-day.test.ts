@@ -22,6 +22,18 @@ describe('nextDay', () => {
     expect(nextDay(stored, oneTable(market)).rows).toEqual(first);
   });
 
+  it('nextDay keeps no band pool between forecasts: another coverage later equals a model loaded afresh', () => {
+    // the decoded model is kept per loaded model (freshLearner), forecasts per ranges and coverage;
+    // a model whose errors end ten days before the ranges do takes those days into its band pool when it
+    // forecasts, which must not carry over to the next forecast. structuredClone(...) is a model no cache has seen.
+    const { market, stored: full } = fixture();
+    const stored = { ...full, residualsThrough: '2025-10-15' };
+    nextDay(stored, oneTable(market));
+    const shared = nextDay(stored, oneTable(market), { coverage: 0.8 }).rows;
+    expect(shared).toEqual(nextDay(structuredClone(stored), oneTable(market), { coverage: 0.8 }).rows);
+    expect(shared.every((r) => Number.isFinite(r.lower) && r.lower < r.upper)).toBe(true);
+  });
+
   it('nextDay refuses a model with drivers when no driver range is given', () => {
     const { market, stored } = fixture();
     const { times, prices } = oneTable(market);

@@ -11,7 +11,10 @@ function hostile(): [string, string, RegExp][] {
   const { stored } = fixture();
   const good = JSON.parse(text(stored));
   const weights: string = good.linear[0].weights;
-  const nanWeights = btoa(String.fromCharCode(...new Uint8Array(new Float32Array(atob(weights).length / 4).fill(NaN).buffer)));
+  // weights are packed (model-file/packed-floats.ts): a NaN can only come in as a block's scale
+  const raw = Uint8Array.from(atob(weights), (c) => c.charCodeAt(0));
+  new DataView(raw.buffer).setFloat32(4, NaN, true);
+  const nanWeights = btoa(String.fromCharCode(...raw));
   const withWeights = (w: string) => JSON.stringify({ ...good, linear: [{ ...good.linear[0], weights: w }, ...good.linear.slice(1)] });
   return [
     ['not json', '{"format":', /is not JSON/],
@@ -19,8 +22,8 @@ function hostile(): [string, string, RegExp][] {
     ['prototype key', `{"__proto__":{"polluted":true},${text(stored).slice(1)}`, /not a valid Spotloom model/],
     ['extra key', JSON.stringify({ ...good, run: 'alert(1)' }), /not a valid Spotloom model/],
     ['wrong format', JSON.stringify({ ...good, format: 'other' }), /not a valid Spotloom model: format/],
-    ['short weights', withWeights(weights.slice(0, 8)), /linear.0.weights has the wrong size/],
-    ['NaN weights', withWeights(nanWeights), /not a finite number/],
+    ['short weights', withWeights(weights.slice(0, 8)), /linear.0.weights is not a packed float array/],
+    ['NaN weights', withWeights(nanWeights), /linear.0.weights is not a packed float array \(.*scale that is not a finite number\)/],
     ['huge', JSON.stringify({ ...good, notes: ['x'.repeat(2_200_000)] }), /larger than the 2 MB limit/],
     ['renamed inside', JSON.stringify({ ...good, name: 'other' }), /stored under another name/],
   ];

@@ -19,10 +19,18 @@
  *
  * Answers are cached per region and year (one `Map` of date → name), so a
  * call for every day of several years costs one lookup per day.
+ *
+ * In the add-in's browser build a country's rules load on demand: an adapter
+ * awaits `prepareHolidays(region)` (holiday-data.ts) before the first call for
+ * that region; in Node they are all there.
  */
-import Holidays from 'date-holidays';
+import type Holidays from 'date-holidays';
 import { InputError } from '../errors';
+import { holidaysPending } from './holiday-data';
+import { holidaysClass } from './holiday-parser';
 import { dayNumber, dateOfDayNumber } from './weekday';
+
+export { prepareHolidays } from './holiday-data';
 
 /** A holiday shorter than this is a part day and does not count (a 23-hour clock-change day does). */
 const MIN_HOURS = 20;
@@ -114,7 +122,7 @@ function regionCache(region: string): RegionCache {
   const hit = regions.get(region);
   if (hit) return hit;
   const parts = canonicalRegion(region);
-  const source = new Holidays({ types: ['public'] });
+  const source = new (parserClass())({ types: ['public'] });
   source.init(parts[0], parts[1], parts[2]);
   const cache: RegionCache = { source, years: new Map() };
   regions.set(region, cache);
@@ -131,7 +139,8 @@ function canonicalRegion(region: string): [string, string?, string?] {
   if (typeof region !== 'string' || region.trim() === '') bad('is empty');
   const parts = region.trim().split('-');
   if (parts.length > 3 || parts.some((p) => p === '')) bad('is not of the form CC, CC-STATE or CC-STATE-REGION');
-  directory ??= new Holidays();
+  if (holidaysPending(parts[0])) notLoaded(parts[0]);
+  directory ??= new (parserClass())();
   const country = pick(directory.getCountries('en'), parts[0]) ?? bad(`names no country the holiday data knows`);
   if (parts.length === 1) return [country];
   const state =
@@ -141,6 +150,14 @@ function canonicalRegion(region: string): [string, string?, string?] {
     pick(directory.getRegions(country, state, 'en') ?? {}, parts[2]) ??
     bad(`names no region of ${country}-${state} the holiday data knows`);
   return [country, state, sub];
+}
+
+function parserClass(): NonNullable<ReturnType<typeof holidaysClass>> {
+  return holidaysClass() ?? notLoaded('any region');
+}
+
+function notLoaded(what: string): never {
+  throw new Error(`the holiday rules of ${what.toUpperCase()} were used before they were loaded (prepareHolidays); please report it`);
 }
 
 function pick(codes: Record<string, string>, wanted: string): string | undefined {

@@ -29,7 +29,8 @@ export function decodeFloats(text: string, bytes: 4 | 8): Float64Array | undefin
   return out;
 }
 
-function encodeBytes(b: Uint8Array): string {
+/** Bytes as base64 text (RFC 4648 §4). */
+export function encodeBytes(b: Uint8Array): string {
   let out = '';
   for (let i = 0; i < b.length; i += 3) {
     const n = (b[i] << 16) | ((b[i + 1] ?? 0) << 8) | (b[i + 2] ?? 0);
@@ -40,7 +41,8 @@ function encodeBytes(b: Uint8Array): string {
   return out;
 }
 
-function decodeBytes(text: string): Uint8Array | undefined {
+/** @returns the bytes of base64 text, or undefined when it is not base64 */
+export function decodeBytes(text: string): Uint8Array | undefined {
   if (text.length % 4 !== 0 || !BASE64.test(text)) return undefined;
   const pad = text.endsWith('==') ? 2 : text.endsWith('=') ? 1 : 0;
   const out = new Uint8Array((text.length / 4) * 3 - pad);

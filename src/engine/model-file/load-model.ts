@@ -5,6 +5,7 @@ import type { NetworkJson } from '../models/network';
 import { decodeFloats } from './base64-floats';
 import { fromStoredLear } from './lear-file';
 import { REPORTED_COVERAGES } from '../models/bands';
+import { unpackFloats } from './packed-floats';
 import { MAX_MODEL_BYTES, MODEL_FORMAT, MODEL_VERSION, StoredModelSchema, type StoredModel } from './model-schema';
 
 /**
@@ -25,7 +26,8 @@ export function parseStoredModel(text: string, source = 'the model'): StoredMode
   }
   const version = (json as { format?: unknown; version?: unknown } | null)?.version;
   if ((json as { format?: unknown } | null)?.format === MODEL_FORMAT && typeof version === 'number' && version < MODEL_VERSION) {
-    // version 1 reported its tuning-block error as its validation error and has no price range to guard inputs with
+    // version 1 reported its tuning-block error as its validation error and has no price range to guard inputs with;
+    // version 2 kept its weights as float32, version 3 packs them (packed-floats.ts)
     throw new InputError(`${source} was saved by an earlier Spotloom (model file version ${version}); train it again to use it`);
   }
   const checked = StoredModelSchema.safeParse(json);
@@ -41,8 +43,9 @@ export function learnerFromStored(stored: StoredModel, source = 'the model'): Le
   const bad = (what: string): never => { throw new InputError(`${source} is not a valid Spotloom model: ${what}`); };
   const p = featureCount(stored);
   const m = stored.setup.slots;
-  const floats = (text: string, bytes: 4 | 8, length: number, what: string) => {
-    const v = decodeFloats(text, bytes);
+  const floats = (text: string, bytes: 4 | 8 | 'packed', length: number, what: string) => {
+    const v = bytes === 'packed' ? unpackFloats(text) : decodeFloats(text, bytes);
+    if (!v && bytes === 'packed') return bad(`${what} is not a packed float array (a wrong length, or a scale that is not a finite number)`);
     if (!v || v.length !== length) return bad(`${what} has the wrong size`);
     if (!v.every(Number.isFinite)) return bad(`${what} holds a value that is not a finite number`);
     return v;
@@ -60,9 +63,9 @@ export function learnerFromStored(stored: StoredModel, source = 'the model'): Le
     const layers: NetworkJson['layers'] = [{ weights: [], biases: [] }];
     for (let l = 1; l < n.sizes.length; l++) {
       const rows = n.sizes[l], cols = n.sizes[l - 1];
-      const w = floats(n.weights[l - 1], 4, rows * cols, `network ${k + 1} layer ${l} weights`);
+      const w = floats(n.weights[l - 1], 'packed', rows * cols, `network ${k + 1} layer ${l} weights`);
       const weights = Array.from({ length: rows }, (_, r) => Array.from(w.subarray(r * cols, (r + 1) * cols)));
-      layers.push({ weights, biases: Array.from(floats(n.biases[l - 1], 4, rows, `network ${k + 1} layer ${l} biases`)) });
+      layers.push({ weights, biases: Array.from(floats(n.biases[l - 1], 'packed', rows, `network ${k + 1} layer ${l} biases`)) });
     }
     return { sizes: [...n.sizes], layers };
   });
@@ -79,7 +82,7 @@ export function learnerFromStored(stored: StoredModel, source = 'the model'): Le
     setup: { ...stored.setup, driverStats },
     notes: stored.notes,
     standardiser: { mean: floats(stored.standardiser.mean, 8, p, 'standardiser.mean'), sd: positive(floats(stored.standardiser.sd, 8, p, 'standardiser.sd'), 'standardiser.sd') },
-    linear: stored.linear.map((l, k) => ({ window: l.window, lambda: l.lambda, weights: floats(l.weights, 4, (p + 1) * m, `linear.${k}.weights`) })),
+    linear: stored.linear.map((l, k) => ({ window: l.window, lambda: l.lambda, weights: floats(l.weights, 'packed', (p + 1) * m, `linear.${k}.weights`) })),
     networks,
     targetRange: { lo: floats(stored.targetRange.lo, 8, m, 'targetRange.lo'), hi: floats(stored.targetRange.hi, 8, m, 'targetRange.hi') },
     neuralWeight: stored.neuralWeight,
@@ -89,7 +92,7 @@ export function learnerFromStored(stored: StoredModel, source = 'the model'): Le
     residuals: {
       keep: stored.residuals.keep,
       bySlot: stored.residuals.bySlot.map((r, k) => {
-        const v = decodeFloats(r, 4);
+        const v = unpackFloats(r);
         if (!v || v.length > stored.residuals.keep || !v.every(Number.isFinite)) return bad(`residuals of slot ${k + 1} are not valid`);
         return Array.from(v);
       }),

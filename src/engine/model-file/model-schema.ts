@@ -3,16 +3,21 @@ import { ALL_FEATURE_GROUPS, type FeatureGroup } from '../features/feature-group
 import { LearnerSettingsSchema } from '../models/learner-settings';
 import { BASE64 } from './base64-floats';
 import { StoredLearSchema } from './lear-file';
+import { PackedFloats } from './packed-floats';
 
 /**
- * The stored model, version 2: the one schema of a model saved in a
+ * The stored model, version 3 (version 3 packs the large float arrays to 16
+ * bits a value, packed-floats.ts; files of versions 1 and 2 are refused with
+ * "train it again"): the one schema of a model saved in a
  * workbook or a file. Its TypeScript type is inferred from it. Objects are
  * strict (unknown keys are refused), names are short plain identifiers (so
  * keys like `__proto__` cannot get in), numbers are finite, and float arrays
- * are base64 text (base64-floats.ts) whose lengths are checked on load.
+ * are base64 text (exact float64 for the standardiser and target range,
+ * base64-floats.ts; packed for the rest, `Packed`) whose lengths are checked
+ * on load.
  */
 export const MODEL_FORMAT = 'spotloom-model';
-export const MODEL_VERSION = 2;
+export const MODEL_VERSION = 3;
 export const MAX_MODEL_BYTES = 2 * 1024 * 1024;
 
 const FORBIDDEN = new Set(['__proto__', 'constructor', 'prototype']);
@@ -24,6 +29,7 @@ export const StoredName = z.string().min(1).max(64).regex(/^[\p{L}\p{N}_][\p{L}\
   .refine((s) => !FORBIDDEN.has(s), 'reserved name');
 const Name = StoredName;
 const Floats = z.string().max(MAX_MODEL_BYTES).regex(BASE64, 'not base64 text');
+const Packed = PackedFloats;
 const Finite = z.number().finite();
 const Day = z.string().regex(/^\d{4}-\d{2}-\d{2}$/);
 /** a model's errors on one block of its training days (models/blocks.ts); null where a part is absent */
@@ -49,11 +55,11 @@ export const StoredModelSchema = z.strictObject({
   }),
   notes: z.array(z.string().max(300)).max(20),
   standardiser: z.strictObject({ mean: Floats, sd: Floats }),
-  linear: z.array(z.strictObject({ window: z.number().int().min(0).max(10_000), lambda: Finite.positive(), weights: Floats })).min(1).max(8),
+  linear: z.array(z.strictObject({ window: z.number().int().min(0).max(10_000), lambda: Finite.positive(), weights: Packed })).min(1).max(8),
   networks: z.array(z.strictObject({
     sizes: z.array(z.number().int().min(1).max(4096)).min(3).max(6),
-    weights: z.array(Floats).max(6),
-    biases: z.array(Floats).max(6),
+    weights: z.array(Packed).max(6),
+    biases: z.array(Packed).max(6),
   })).max(10),
   targetRange: z.strictObject({ lo: Floats, hi: Floats }),
   neuralWeight: Finite.min(0).max(1),
@@ -62,7 +68,7 @@ export const StoredModelSchema = z.strictObject({
   lear: StoredLearSchema.optional(),
   /** coverages the bands are built at after adaptive updates (models/adaptive-coverage.ts) */
   bandCoverage: z.array(Finite.gt(0).lt(1)).max(8).optional(),
-  residuals: z.strictObject({ keep: z.number().int().min(1).max(1000), bySlot: z.array(Floats).max(96) }),
+  residuals: z.strictObject({ keep: z.number().int().min(1).max(1000), bySlot: z.array(Packed).max(96) }),
   tuning: BlockScoresSchema,
   holdout: BlockScoresSchema,
   priceRange: z.strictObject({ lo: Finite, hi: Finite }),

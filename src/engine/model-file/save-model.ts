@@ -3,6 +3,7 @@ import type { BlockScores, Learner } from '../models/learner';
 import type { Resolution } from '../series/series';
 import { encodeFloats } from './base64-floats';
 import { toStoredLear } from './lear-file';
+import { packFloats } from './packed-floats';
 import { MAX_MODEL_BYTES, MODEL_FORMAT, MODEL_VERSION, StoredModelSchema, type StoredModel } from './model-schema';
 
 /**
@@ -31,19 +32,19 @@ export function toStoredModel(learner: Learner, meta: { name: string; zone: stri
     },
     notes: state.notes,
     standardiser: { mean: f64(state.standardiser.mean), sd: f64(state.standardiser.sd) },
-    linear: state.linear.map((l) => ({ window: l.window, lambda: l.lambda, weights: encodeFloats(l.weights, 4) })),
-    // ridge coefficients are 32-bit (solveRidge) and brain.js keeps 32-bit weights: 4 bytes store both exactly
+    // the large arrays packed to 16 bits a value (packed-floats.ts): forecasts move by less than 1e-4 of the price range
+    linear: state.linear.map((l) => ({ window: l.window, lambda: l.lambda, weights: packFloats(l.weights) })),
     networks: state.networks.map((n) => ({
       sizes: n.sizes,
-      weights: n.layers.slice(1).map((l) => encodeFloats(l.weights.flat(), 4)),
-      biases: n.layers.slice(1).map((l) => encodeFloats(l.biases, 4)),
+      weights: n.layers.slice(1).map((l) => packFloats(l.weights.flat())),
+      biases: n.layers.slice(1).map((l) => packFloats(l.biases)),
     })),
     targetRange: { lo: f64(state.targetRange.lo), hi: f64(state.targetRange.hi) },
     neuralWeight: state.neuralWeight,
     learWeight: state.learWeight,
     ...(state.lear ? { lear: toStoredLear(state.lear) } : {}),
     ...(state.bandCoverage ? { bandCoverage: [...state.bandCoverage] } : {}),
-    residuals: { keep: state.residuals.keep, bySlot: state.residuals.bySlot.map((r) => encodeFloats(r, 4)) },
+    residuals: { keep: state.residuals.keep, bySlot: state.residuals.bySlot.map((r) => packFloats(r)) },
     tuning: storedScores(state.tuning),
     holdout: storedScores(state.holdout),
     priceRange: { ...state.priceRange },

@@ -35,7 +35,7 @@ export function emptyPool(slots: number, keep: number): ResidualPool {
 
 export function addResiduals(pool: ResidualPool, actual: ArrayLike<number>, forecast: ArrayLike<number>, scale: number): void {
   pool.bySlot.forEach((list, s) => {
-    // 32-bit, like the stored model keeps them, so a loaded model bands exactly alike
+    // 32-bit, as the pool has always kept them (the model file packs them further: model-file/packed-floats.ts)
     const r = Math.fround((actual[s] - forecast[s]) / scale);
     if (!Number.isFinite(r)) return;
     list.push(r);

@@ -60,8 +60,7 @@ export function forecastAhead(model: DayAheadModel, series: Series, drivers: str
  * @throws InputError when there is no price, or the next day's driver rows are missing
  */
 export function nextDayFrame(series: Series, drivers: string[]): { full: Series; frame: DayFrame; first: number; given: (d: number) => boolean } {
-  const full = drivers.length === 0 ? withNextDay(series) : series;
-  const frame = inputFrame(full);
+  const { full, frame } = framed(series, drivers.length === 0);
   const first = frame.price.length;
   if (first === 0) throw new InputError('there is no known price to forecast from');
   const given = (d: number) => drivers.every((n) => {
@@ -74,6 +73,26 @@ export function nextDayFrame(series: Series, drivers: string[]): { full: Series;
     );
   }
   return { full, frame, first, given };
+}
+
+/**
+ * The series' input frame (with the next day's empty rows added for a model
+ * without drivers), built once per series object: cells that forecast from
+ * the same ranges share it (functions/range-cache.ts hands them one series).
+ * Each caller gets its own `price` list, which the forecast extends.
+ */
+const frames = new WeakMap<Series, { plain?: { full: Series; frame: DayFrame }; withNext?: { full: Series; frame: DayFrame } }>();
+
+function framed(series: Series, addNextDay: boolean): { full: Series; frame: DayFrame } {
+  let memo = frames.get(series);
+  if (!memo) frames.set(series, (memo = {}));
+  const which = addNextDay ? 'withNext' : 'plain';
+  if (!memo[which]) {
+    const full = addNextDay ? withNextDay(series) : series;
+    memo[which] = { full, frame: inputFrame(full) };
+  }
+  const { full, frame } = memo[which]!;
+  return { full, frame: { ...frame, price: frame.price.slice() } };
 }
 
 /** The series with empty rows for the local day after its last period's day (for models without drivers). */

@@ -1,15 +1,26 @@
-import uPlot from 'uplot';
+import type uPlot from 'uplot';
 import type { CheckRow } from '../jobs/protocol';
 import { chartSize, watchWidth } from './chart-size';
+import { loadUplot } from './load-uplot';
 
 /**
  * Actual prices against the model's forecast (and the naive-week yardstick)
  * over the test span, in the market's own clock (uPlot.tzDate), with the
- * band as two thin lines. Unknown values are gaps (null).
+ * band as two thin lines. Unknown values are gaps (null). Drawn once uPlot's
+ * chunk has loaded (load-uplot.ts).
  *
  * @returns a function that removes the chart
  */
 export function drawBacktestChart(container: HTMLElement, rows: CheckRow[], zone: string, label: string): () => void {
+  let removed = false;
+  let remove = () => {};
+  void loadUplot().then((UPlot) => {
+    if (!removed) remove = draw(UPlot, container, rows, zone, label);
+  });
+  return () => { removed = true; remove(); };
+}
+
+function draw(UPlot: typeof uPlot, container: HTMLElement, rows: CheckRow[], zone: string, label: string): () => void {
   const n = (x: number) => (Number.isFinite(x) ? x : null);
   const data: uPlot.AlignedData = [
     rows.map((r) => r.time / 1000),
@@ -21,7 +32,7 @@ export function drawBacktestChart(container: HTMLElement, rows: CheckRow[], zone
   ];
   const opts: uPlot.Options = {
     ...chartSize(container, 220),
-    tzDate: (ts) => uPlot.tzDate(new Date(ts * 1000), zone),
+    tzDate: (ts) => UPlot.tzDate(new Date(ts * 1000), zone),
     legend: { show: true, live: false },
     axes: [{ stroke: '#47525e', size: 48 }, { stroke: '#47525e', size: 44, label: 'price', labelSize: 14 }],
     series: [
@@ -33,7 +44,7 @@ export function drawBacktestChart(container: HTMLElement, rows: CheckRow[], zone
       { label: 'naive-week', stroke: '#c2410c', width: 1, dash: [2, 2], show: false },
     ],
   };
-  const plot = new uPlot(opts, data, container);
+  const plot = new UPlot(opts, data, container);
   const unwatch = watchWidth(container, () => plot.setSize(chartSize(container, 220)));
   return () => { unwatch(); plot.destroy(); };
 }

@@ -1,12 +1,14 @@
-import uPlot from 'uplot';
+import type uPlot from 'uplot';
 import { chartSize, watchWidth } from './chart-size';
+import { loadUplot, uplotIfLoaded } from './load-uplot';
 
 /**
  * The live validation-loss chart of training: one line per network of the
  * ensemble (x: that network's own epochs, y: validation MAE in price
  * units), with a legend naming each network, so the lines lie over each
  * other instead of joining into one zig-zag. Points are added as the worker
- * reports them and drawn at most once per animation frame.
+ * reports them and drawn at most once per animation frame, once uPlot's
+ * chunk has loaded (load-uplot.ts; fetching starts with the chart).
  */
 const COLOURS = ['#0f766e', '#c2410c', '#1f6f8b', '#7c3aed', '#a16207', '#be123c', '#4d7c0f', '#334155'];
 
@@ -27,7 +29,9 @@ export class LossChart {
   private pending = false;
   private unwatch: () => void = () => {};
 
-  constructor(private readonly container: HTMLElement) {}
+  constructor(private readonly container: HTMLElement) {
+    void loadUplot().catch(() => {}); // fetched while the worker starts; a failure shows when drawing
+  }
 
   add(network: number, epoch: number, loss: number): void {
     this.data.push({ network, epoch, loss });
@@ -61,6 +65,10 @@ export class LossChart {
   }
 
   private draw(): void {
+    if (!uplotIfLoaded()) {
+      void loadUplot().then(() => this.draw());
+      return;
+    }
     const columns = lossColumns(this.data);
     const lines = columns.length - 1;
     // a new network needs a new series: the chart is built again with one line more
@@ -84,7 +92,8 @@ export class LossChart {
         label: `network ${k + 1}`, stroke: COLOURS[k % COLOURS.length], width: 2, points: { show: true, size: 4 }, spanGaps: true,
       }))],
     };
-    this.plot = new uPlot(opts, columns as uPlot.AlignedData, this.container);
+    const UPlot = uplotIfLoaded()!;
+    this.plot = new UPlot(opts, columns as uPlot.AlignedData, this.container);
     this.container.setAttribute('data-networks', String(lines));
     this.unwatch = watchWidth(this.container, () => this.plot?.setSize(chartSize(this.container, 170)));
   }

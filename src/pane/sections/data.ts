@@ -1,4 +1,4 @@
-import { checkZone, holidaysOfYear, InputError } from '../../engine';
+import { checkZone, holidaysOfYear, InputError, prepareHolidays } from '../../engine';
 import type { PaneContext } from '../context';
 import { clear, field, guarded, h, messageLine } from '../dom';
 import { checkData, splitAddresses } from '../logic/read-ranges';
@@ -54,6 +54,7 @@ export function dataSection(ctx: PaneContext): HTMLElement {
     checkZone(st.zone);
     if (st.region) {
       try {
+        await prepareHolidays(st.region); // the region's rules load on first use
         holidaysOfYear(2025, st.region);
       } catch {
         throw new InputError(`"${st.region}" is not a holiday region the calendar knows; use a code such as DE, FR, DE-BY or AU-SA, or leave it empty`);

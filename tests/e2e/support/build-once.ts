@@ -13,7 +13,7 @@ import { fileURLToPath } from 'node:url';
  */
 export const ROOT = fileURLToPath(new URL('../../..', import.meta.url));
 export const DIST = join(ROOT, 'dist');
-const INPUTS = ['src', 'webpack.config.js', 'manifest.xml', 'package.json', 'package-lock.json', 'tsconfig.json'];
+const INPUTS = ['src', 'scripts', 'webpack.config.js', 'manifest.xml', 'package.json', 'package-lock.json', 'tsconfig.json'];
 const OUTPUTS = ['preview.html', 'preview.js', 'taskpane.html', 'runtime.js', 'office-js/office.js'];
 
 function newest(path: string): number {
