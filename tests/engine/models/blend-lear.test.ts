@@ -43,14 +43,20 @@ describe('the blend with a LEAR part', () => {
     expect(b.filter((r) => !before(r)).map((r) => r.forecast)).not.toEqual(a.filter((r) => !before(r)).map((r) => r.forecast));
   });
 
-  it('forecasts exactly alike after a save and load, its LEAR part included', () => {
+  it('forecasts alike after a save and load (LEAR part within 1e-6, packed weights within 1e-4 of the price range)', () => {
     const frame = inputFrame(series);
     const text = storedModelText(toStoredModel(model, { name: 'blend', zone: 'Europe/Berlin', resolution: 60 }));
     const loaded = learnerFromStored(parseStoredModel(text));
     expect(loaded.state!.learWeight).toBe(state.learWeight);
     const view = frameBefore(frame, frame.days.length - 1);
-    expect(loaded.learPartOf(view)).toEqual(model.learPartOf(view));
-    expect(Array.from(loaded.predict(view).point)).toEqual(Array.from(model.predict(view).point));
+    const width0 = state.priceRange.hi - state.priceRange.lo;
+    const la = loaded.learPartOf(view)!, lb = model.learPartOf(view)!;
+    la.forEach((v, k) => expect(Math.abs(v - lb[k])).toBeLessThanOrEqual(1e-6 * width0));
+    // the model file packs network and ridge weights to 16 bits (model-file/packed-floats.ts): forecasts move by
+    // at most 1e-4 of the training price range; LEAR's coefficients are 32-bit
+    const width = state.priceRange.hi - state.priceRange.lo;
+    const a = loaded.predict(view).point, b = model.predict(view).point;
+    a.forEach((v, k) => expect(Math.abs(v - b[k])).toBeLessThanOrEqual(1e-4 * width));
   });
 
   it('its LEAR part changes the forecast: without it the linear part takes its weight', () => {
