@@ -1,6 +1,8 @@
 import { DateTime } from 'luxon';
 import { describe, expect, it } from 'vitest';
-import { baselineModel, buildSeries, inputFrame, parseCsv, runBacktest, type Series } from '../../../src/engine';
+import {
+  baselineModel, buildSeries, inputFrame, parseCsv, runBacktest, targetDay, type DayAheadModel, type Series,
+} from '../../../src/engine';
 
 const ZONE = 'Europe/Berlin';
 
@@ -94,5 +96,125 @@ describe('runBacktest(model, frame, series, options)', () => {
     const ok = rows.filter((r) => Number.isFinite(r.actual));
     expect(ok).toHaveLength(23);
     expect(summary.mae).toBeCloseTo(ok.reduce((a, r) => a + Math.abs(r.actual - r.forecast), 0) / 23, 12);
+  });
+});
+
+/** naive-week that records the target day of every view it is fitted or refreshed on. */
+function recordingModel(minHistoryDays = 7) {
+  const fitted: number[] = [];
+  const updated: number[] = [];
+  const predicted: number[] = [];
+  const base = baselineModel('naive-week');
+  const model: DayAheadModel = {
+    name: 'recording', minHistoryDays,
+    fit: (view) => { fitted.push(targetDay(view)); },
+    predict: (view) => { predicted.push(targetDay(view)); return base.predict(view); },
+    update: (view) => { updated.push(targetDay(view)); },
+  };
+  return { model, fitted, updated, predicted };
+}
+
+// The walk-forward schedule (Weron 2014, Int. J. Forecasting 30(4), sec. 3: a rolling
+// calibration window, re-estimated every k days): fit once on the days before the first
+// test day, then refresh on the view of every k-th day after it, never on the first.
+// Series from 2025-03-10: 2025-03-17 is day index 7, 2025-03-26 day index 16.
+describe('runBacktest: fit, refresh, progress and cancel', () => {
+  const span = { testStart: '2025-03-17', testEnd: '2025-03-26' };
+
+  it.each([
+    [0, []],
+    [1, [8, 9, 10, 11, 12, 13, 14, 15, 16]],
+    [3, [10, 13, 16]],
+    [undefined, []],
+  ])('retrainEvery %s refreshes on the views of days %j', (retrainEvery, days) => {
+    const s = series(20, wobble);
+    const r = recordingModel();
+    runBacktest(r.model, inputFrame(s), s, { ...span, retrainEvery });
+    expect(r.fitted).toEqual([7]);
+    expect(r.updated).toEqual(days);
+    expect(r.predicted).toEqual([7, 8, 9, 10, 11, 12, 13, 14, 15, 16]);
+  });
+
+  it('reports progress once per forecast day, out of the days in the span', () => {
+    const s = series(20, wobble);
+    const calls: [number, number, string][] = [];
+    runBacktest(baselineModel('naive-week'), inputFrame(s), s, { ...span, progress: (done, total, what) => calls.push([done, total, what]) });
+    expect(calls).toEqual(Array.from({ length: 10 }, (_, k) => [k + 1, 10, 'forecast days']));
+  });
+
+  it('stops with an InputError when the signal is set between days', () => {
+    const s = series(20, wobble);
+    const r = recordingModel();
+    const signal = { aborted: false };
+    const progress = (done: number) => { if (done === 2) signal.aborted = true; };
+    expect(() => runBacktest(r.model, inputFrame(s), s, { ...span, progress, signal })).toThrow('the backtest was cancelled');
+    expect(r.predicted).toEqual([7, 8]);
+  });
+
+  it('reports its own run time in seconds, not more than the time measured around it', () => {
+    const s = series(20, wobble);
+    const before = Date.now();
+    const { summary } = runBacktest(baselineModel('naive-week'), inputFrame(s), s, span);
+    const elapsed = (Date.now() - before) / 1000;
+    expect(summary.seconds).toBeGreaterThanOrEqual(0);
+    expect(summary.seconds).toBeLessThanOrEqual(elapsed);
+  });
+
+  it('gives no band scores for a model without bands', () => {
+    const s = series(20, wobble);
+    const { summary } = runBacktest(baselineModel('naive-week'), inputFrame(s), s, span);
+    expect(summary).not.toHaveProperty('bands');
+    expect(summary).not.toHaveProperty('nominalCoverage');
+  });
+});
+
+// The test span's refusals, word for word (error contract, design.md: where and what to fix).
+describe('runBacktest: the test span', () => {
+  const s = series(20, wobble); // local days 2025-03-10 .. 2025-03-29
+  const frame = inputFrame(s);
+  const run = (options: { testStart: string; testEnd?: string }, model = baselineModel('naive-week')) =>
+    runBacktest(model, frame, s, options);
+
+  it('needs exactly minHistoryDays days before the first test day', () => {
+    expect(run({ testStart: '2025-03-17', testEnd: '2025-03-17' }).rows).toHaveLength(24);
+    expect(() => run({ testStart: '2025-03-16' })).toThrow(
+      '--test-start 2025-03-16 leaves 6 days of history before it; model naive-week needs at least 7',
+    );
+  });
+
+  it('reads only whole YYYY-MM-DD dates', () => {
+    for (const bad of ['x2025-03-20', '2025-03-20x', '2025-03-20T00:00']) {
+      expect(() => run({ testStart: bad })).toThrow(`--test-start "${bad}" is not a date YYYY-MM-DD`);
+      expect(() => run({ testStart: '2025-03-20', testEnd: bad })).toThrow(`--test-end "${bad}" is not a date YYYY-MM-DD`);
+    }
+  });
+
+  it('refuses an end before the start, and a start before or after the data', () => {
+    expect(() => run({ testStart: '2025-03-20', testEnd: '2025-03-18' })).toThrow(
+      '--test-end 2025-03-18 is before --test-start 2025-03-20',
+    );
+    for (const start of ['2025-01-01', '2031-01-01']) {
+      expect(() => run({ testStart: start })).toThrow(
+        `--test-start ${start} is outside the data, which covers 2025-03-10 to 2025-03-29`,
+      );
+    }
+  });
+
+  it('a model that needs no history may start on the first day of the data', () => {
+    const r = recordingModel(0);
+    expect(run({ testStart: '2025-03-10', testEnd: '2025-03-11' }, r.model).rows).toHaveLength(48);
+    expect(r.fitted).toEqual([0]);
+  });
+
+  it('ends on the last day that has a known price, and refuses a span with none', () => {
+    const gap = series(20, wobble);
+    const from = gap.times.findIndex((t) => t >= Date.parse('2025-03-28T00:00:00+01:00'));
+    for (let i = from; i < gap.price.length; i++) gap.price[i] = NaN; // 2025-03-28 and 2025-03-29 unknown
+    const { rows, summary } = runBacktest(baselineModel('naive-week'), inputFrame(gap), gap, { testStart: '2025-03-25' });
+    expect(summary.days).toBe(3); // 25, 26, 27 March
+    expect(rows).toHaveLength(3 * 24);
+    expect(() => runBacktest(baselineModel('naive-week'), inputFrame(gap), gap, { testStart: '2025-03-28' })).toThrow(
+      'the test span from 2025-03-28 holds no day with known prices (the data covers 2025-03-10 to 2025-03-29)',
+    );
   });
 });

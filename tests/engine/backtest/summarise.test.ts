@@ -73,3 +73,26 @@ describe('summarise(model, rows, seconds)', () => {
     expect(summarise('m', [], 0)).toMatchObject({ periods: 0, days: 0 });
   });
 });
+
+describe('summarise with partial bands', () => {
+  // |actual - forecast| per period: 1.5, 9.5, 6.9, 1.6, 4.5, 5.5, 2.5, 7.5 (metrics-small.json),
+  // so forecast ± 5 holds periods 1, 4, 5 and 7 (1-based). Worked by hand.
+  it('scores coverage only on periods with both edges known', () => {
+    const r = rows().map((x, i) => (i < 2 ? { ...x, upper: NaN } : x));
+    // periods 3..8 remain: 1.6, 4.5 and 2.5 are inside, 3 of 6
+    expect(summarise('m', r, 0).coverage).toBe(3 / 6);
+  });
+
+  it('scores each band level only on periods with both of its edges, and leaves out a level no period has', () => {
+    const r = rows().map((x, i) => ({ ...x, levels: [{ lower: x.lower, upper: i < 2 ? NaN : x.upper }] }));
+    const s = summarise('m', r, 0, 0.8, [0.8, 0.5]);
+    expect(s.bands).toHaveLength(1);
+    expect(s.bands![0]).toMatchObject({ nominal: 0.8, coverage: 3 / 6, periods: 6 });
+    // rows without any levels: every level is left out
+    expect(summarise('m', rows(), 0, 0.8, [0.8]).bands).toEqual([]);
+  });
+
+  it('has no nominal coverage when none is given', () => {
+    expect(summarise('m', rows(), 0)).not.toHaveProperty('nominalCoverage');
+  });
+});

@@ -68,3 +68,40 @@ describe('scoreAll(actual, forecast, { season, insample, reference })', () => {
     expect(() => scoreAll([1, 2], [1, 2], { season: 1, insample: [1, -Infinity] })).toThrow(InputError);
   });
 });
+
+// Error contract (design.md): one line saying where and what to fix, so the message is
+// checked word for word; positions count from 1 as a spreadsheet's rows do.
+describe('scoreAll says where bad input is', () => {
+  test('names the column pair and the lengths when they differ', () => {
+    expect(() => scoreAll([1, 2], [1], { season: 1 })).toThrow(
+      'scores requires actual and forecast of the same length (got 2 and 1)',
+    );
+  });
+
+  test('names the column and the 1-based position of an infinite value', () => {
+    expect(() => scoreAll([1, 2], [1, Infinity], { season: 1 })).toThrow(
+      'scores: forecast value 2 is Infinity; give a finite number, or NaN for unknown',
+    );
+    expect(() => scoreAll([1, 2], [1, 2], { season: 1, insample: [-Infinity, 1] })).toThrow(
+      'MASE: in-sample value 1 is -Infinity; give a finite number, or NaN for unknown',
+    );
+    expect(() => scoreAll([1, 2, 3], [1, 2, 3], { season: 1, reference: [1, NaN, Infinity] })).toThrow(
+      'rMAE: reference value 3 is Infinity; give a finite number, or NaN for unknown',
+    );
+  });
+
+  test('names a season it refuses', () => {
+    expect(() => scoreAll([1, 2], [1, 2], { season: 2.5 })).toThrow(
+      'MASE season must be a whole number of periods of at least 1 (got 2.5)',
+    );
+  });
+
+  test('passes minAbsActual on to MAPE (worked by hand)', () => {
+    // guard 1: (|6-5|/5 + |110-100|/100) / 2 = (20 % + 10 %) / 2 = 15 %;
+    // guard 10 leaves out actual 5: 10 % over one pair.
+    expect(scoreAll([5, 100], [6, 110], { season: 1 }).mape).toBeCloseTo(15, 12);
+    const guarded = scoreAll([5, 100], [6, 110], { season: 1, minAbsActual: 10 });
+    expect(guarded.mape).toBeCloseTo(10, 12);
+    expect(guarded.mapeSkipped).toBe(1);
+  });
+});

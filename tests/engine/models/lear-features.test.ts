@@ -55,6 +55,45 @@ describe('learDesign(level, slots, drivers)', () => {
   });
 });
 
+// The reduced levels, input by input, as the table in lear-features.ts states them
+// (our own reductions of the published set above); quarter-hours, so that the last hour
+// of D-1 (slots 92-95) and the hourly means (4 slots each) differ from single slots.
+describe('learDesign at quarter-hours, period 37 (hour 9)', () => {
+  const keys = (level: Parameters<typeof learDesign>[0]) => {
+    const d = learDesign(level, 96, ['load']);
+    return d.byPeriod[37].map((i) => d.inputs[i].key);
+  };
+  const dummies = [1, 2, 3, 4, 5, 6, 7].map((w) => `weekday ${w}`);
+
+  it('own-period: own slot of D-1, D-2, D-3, D-7, last hour of D-1, own slot of the driver at D, D-1, D-7, 7 dummies', () => {
+    expect(keys('own-period')).toEqual([
+      'price D-1 37-38', 'price D-2 37-38', 'price D-3 37-38', 'price D-7 37-38', 'price D-1 92-96',
+      'load D-0 37-38', 'load D-1 37-38', 'load D-7 37-38', ...dummies,
+    ]);
+  });
+
+  it('own-period-short and minimal', () => {
+    expect(keys('own-period-short')).toEqual([
+      'price D-1 37-38', 'price D-2 37-38', 'price D-3 37-38', 'price D-1 92-96', 'load D-0 37-38', 'load D-1 37-38',
+    ]);
+    expect(keys('minimal')).toEqual(['price D-1 37-38', 'price D-2 37-38', 'price D-1 92-96', 'load D-0 37-38']);
+  });
+
+  it('recent-profile: the 24 hourly means of D-1 cover slots 4j to 4j + 4', () => {
+    const k = keys('recent-profile');
+    expect(k.slice(0, 24)).toEqual(Array.from({ length: 24 }, (_, j) => `price D-1 ${4 * j}-${4 * j + 4}`));
+    expect(k).toContain('price D-7 37-38');
+  });
+
+  it('every input reads the source its key names; the dummies read the weekday', () => {
+    for (const level of LEAR_LEVELS) {
+      for (const x of learDesign(level, 96, ['load']).inputs) {
+        expect(x.source).toBe(x.weekday ? 'weekday' : x.key.split(' ')[0]);
+      }
+    }
+  });
+});
+
 describe('inputValue(view, input, t, weekdayOf)', () => {
   const slots = 4;
   const frame: DayFrame = {
