@@ -523,7 +523,7 @@ describe('the standalone preview in a real browser', () => {
     await page.click('[data-test="train-button"]');
     const done = await outcome('train-message');
     expect(done.kind).toBe('error');
-    expect(done.text).toMatch(/^training needs at least \d+ usable days/);
+    expect(done.text).toMatch(/^model blend needs at least 28 days of price history; the data has \d+/);
     await pv.settled();
     expect(await pv.fingerprint()).toBe(before);
     expect(await pv.storedModels()).toEqual(models);
