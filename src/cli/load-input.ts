@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import {
   buildSeries, buildSeriesWithActuals, buildSeriesWithDrivers, describeDialect, describeIngest, formatTimestamp, InputError, parseCsv, parseDecimalMark,
-  parseDelimiter, plural, type DialectChoice, type IngestReport, type Series, type Table,
+  parseDelimiter, plural, type DialectChoice, type IngestReport, type Series, type StoredModel, type Table,
 } from '../engine';
 
 /** The command-line flags that fix a data file's dialect (detected when left out). */
@@ -53,6 +53,21 @@ export function loadForecastInput(files: { input: string; drivers?: string }, zo
   const drivers = readTableFile(files.drivers, dialect);
   const result = buildSeriesWithDrivers(history, drivers, { zone });
   return reported(result, `${files.input} + ${files.drivers}`, zone, 'fill');
+}
+
+/**
+ * The series a stored model forecasts or explains from (loadForecastInput
+ * in the model's zone), refused when its periods or driver columns do not
+ * fit the model.
+ */
+export function loadModelInput(stored: StoredModel, flags: { input: string; drivers?: string } & DialectFlags): Series {
+  const { series } = loadForecastInput({ input: flags.input, drivers: flags.drivers }, stored.zone, dialectChoice(flags));
+  if (series.resolution !== stored.resolution) {
+    throw new InputError(`has ${series.resolution}-minute periods but the model was trained on ${stored.resolution}-minute periods`, { file: flags.input });
+  }
+  const missing = stored.setup.drivers.filter((d) => !(d in series.drivers));
+  if (missing.length) throw new InputError(`lacks the driver column "${missing[0]}" the model was trained with`, { file: flags.drivers ?? flags.input });
+  return series;
 }
 
 /**

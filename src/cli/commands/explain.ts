@@ -2,7 +2,7 @@ import {
   byMagnitude, explainAhead, InputError, learnerFromStored, parseStoredModel, REFERENCE_CHOICES, sensitivityAhead,
   type Explanation, type ReferenceChoice, type StoredModel,
 } from '../../engine';
-import { dialectChoice, loadForecastInput, readText, type DialectFlags } from '../load-input';
+import { loadModelInput, readText, type DialectFlags } from '../load-input';
 
 export interface ExplainFlags extends DialectFlags {
   model: string;
@@ -30,12 +30,7 @@ export async function explainCommand(flags: ExplainFlags): Promise<void> {
     throw new InputError(`--tz ${flags.tz} differs from the zone the model was trained in (${stored.zone}); leave --tz out or train the model in that zone`);
   }
   const learner = learnerFromStored(stored, flags.model);
-  const { series } = loadForecastInput({ input: flags.input, drivers: flags.drivers }, stored.zone, dialectChoice(flags));
-  if (series.resolution !== stored.resolution) {
-    throw new InputError(`has ${series.resolution}-minute periods but the model was trained on ${stored.resolution}-minute periods`, { file: flags.input });
-  }
-  const missing = stored.setup.drivers.filter((d) => !(d in series.drivers));
-  if (missing.length) throw new InputError(`lacks the driver column "${missing[0]}" the model was trained with`, { file: flags.drivers ?? flags.input });
+  const series = loadModelInput(stored, flags);
   const e = explainAhead(learner, series, stored.setup.drivers, flags.against as ReferenceChoice);
   const sensitivity = flags.sensitivity ? sensitivityAhead(learnerFromStored(stored, flags.model), series, stored.setup.drivers).drivers : undefined;
 

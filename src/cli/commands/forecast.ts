@@ -1,7 +1,7 @@
 import {
-  forecastAhead, formatTimestamp, InputError, learnerFromStored, parseStoredModel, plural, toWallClock, type StoredModel,
+  forecastAhead, formatTimestamp, learnerFromStored, parseStoredModel, plural, toWallClock, type StoredModel,
 } from '../../engine';
-import { dialectChoice, loadForecastInput, readText, type DialectFlags } from '../load-input';
+import { loadModelInput, readText, type DialectFlags } from '../load-input';
 import { writeCsv } from '../write-csv';
 
 export interface ForecastFlags extends DialectFlags {
@@ -24,12 +24,7 @@ export interface ForecastFlags extends DialectFlags {
 export async function forecastCommand(flags: ForecastFlags, now: () => number = Date.now): Promise<void> {
   const stored = parseStoredModel(readText(flags.model), flags.model);
   const learner = learnerFromStored(stored, flags.model);
-  const { series } = loadForecastInput({ input: flags.input, drivers: flags.drivers }, stored.zone, dialectChoice(flags));
-  if (series.resolution !== stored.resolution) {
-    throw new InputError(`has ${series.resolution}-minute periods but the model was trained on ${stored.resolution}-minute periods`, { file: flags.input });
-  }
-  const missing = stored.setup.drivers.filter((d) => !(d in series.drivers));
-  if (missing.length) throw new InputError(`lacks the driver column "${missing[0]}" the model was trained with`, { file: flags.drivers ?? flags.input });
+  const series = loadModelInput(stored, flags);
   const { rows, days, notes } = forecastAhead(learner, series, stored.setup.drivers);
   const issuedAt = now();
   const issued = formatTimestamp(Math.floor(issuedAt / 1000) * 1000, stored.zone);
