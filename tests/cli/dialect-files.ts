@@ -1,5 +1,7 @@
+import { join } from 'node:path';
 import seedrandom from 'seedrandom';
 import { formatTimestamp } from '../../src/engine';
+import { writeFile } from './run-cli';
 
 /**
  * A plain data file (`,`, `.` decimals, ISO timestamps with offsets) of
@@ -61,5 +63,29 @@ export function dialects(plain: string): Record<string, string> {
     'missing-markers': write(body(cells, (c) => (c === '' ? MARKERS[m++ % MARKERS.length] : c)), ','),
     'bom-crlf': `\ufeff${write(cells, ',', '\r\n')}`,
     'all-at-once': `\ufeff${write(body(cells, (c, j) => (j === 0 ? wall(c) : c === '' ? MARKERS[m++ % MARKERS.length] : continental(c))), ';', '\r\n')}`,
+  };
+}
+
+/**
+ * The daily files of a desk's morning, written into `dir`: history to
+ * 2025-10-25, the same with tomorrow (the 25-hour 2025-10-26, Directive
+ * 2000/84/EC) appended with empty prices, and tomorrow's drivers in a file
+ * of their own as a continental desk writes them (`;`, decimal commas,
+ * local wall clock, columns in another order); `model` is where a test
+ * saves the model it trains.
+ */
+export function dailyFiles(dir: string): { historyFile: string; oneFile: string; driversFile: string; model: string } {
+  const lines = plainFile().trimEnd().split('\n');
+  const header = lines[0];
+  const history = lines.filter((l, i) => i > 0 && l < '2025-10-26');
+  const tomorrow = lines.filter((l) => l.startsWith('2025-10-26'));
+  return {
+    historyFile: writeFile(dir, 'history.csv', `${[header, ...history].join('\n')}\n`),
+    oneFile: writeFile(dir, 'one-file.csv', `${[header, ...history, ...tomorrow.map((l) => l.replace(/^([^,]*),[^,]*,/, '$1,,'))].join('\n')}\n`),
+    driversFile: writeFile(dir, 'drivers-2025-10-26.csv', `${['timestamp;wind_forecast;load_forecast', ...tomorrow.map((l) => {
+      const [t, , load, wind] = l.split(',');
+      return [t.slice(0, 16).replace('T', ' '), wind.replace('.', ','), load.replace('.', ',')].join(';');
+    })].join('\n')}\n`),
+    model: join(dir, 'linear.json'),
   };
 }

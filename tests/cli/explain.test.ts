@@ -1,8 +1,7 @@
-import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { plainFile } from './dialect-files';
+import { dailyFiles } from './dialect-files';
 import { runMain } from './in-process';
-import { runCli, scratch, writeFile } from './run-cli';
+import { runCli, scratch } from './run-cli';
 
 /**
  * spotloom explain on the invented dialect file (tests/cli/dialect-files.ts):
@@ -10,17 +9,7 @@ import { runCli, scratch, writeFile } from './run-cli';
  * 2000/84/EC), its drivers in a file of their own in a continental dialect.
  */
 const dir = scratch();
-const lines = plainFile().trimEnd().split('\n');
-const header = lines[0];
-const history = lines.filter((l, i) => i > 0 && l < '2025-10-26');
-const tomorrow = lines.filter((l) => l.startsWith('2025-10-26'));
-const historyFile = writeFile(dir, 'history.csv', `${[header, ...history].join('\n')}\n`);
-const oneFile = writeFile(dir, 'one-file.csv', `${[header, ...history, ...tomorrow.map((l) => l.replace(/^([^,]*),[^,]*,/, '$1,,'))].join('\n')}\n`);
-const driversFile = writeFile(dir, 'drivers-2025-10-26.csv', `${['timestamp;wind_forecast;load_forecast', ...tomorrow.map((l) => {
-  const [t, , load, wind] = l.split(',');
-  return [t.slice(0, 16).replace('T', ' '), wind.replace('.', ','), load.replace('.', ',')].join(';');
-})].join('\n')}\n`);
-const model = join(dir, 'linear.json');
+const { historyFile, oneFile, driversFile, model } = dailyFiles(dir);
 
 async function explain(args: string[]) {
   const r = await runMain(['explain', '--model', model, ...args]);

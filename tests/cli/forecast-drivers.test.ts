@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { forecastCommand } from '../../src/cli/commands/forecast';
-import { plainFile } from './dialect-files';
+import { dailyFiles } from './dialect-files';
 import { runMain } from './in-process';
 import { scratch, writeFile } from './run-cli';
 
@@ -11,18 +11,7 @@ import { scratch, writeFile } from './run-cli';
  * another. The forecast day is the 25-hour 2025-10-26 (Directive 2000/84/EC).
  */
 const dir = scratch();
-const lines = plainFile().trimEnd().split('\n');
-const header = lines[0];
-const history = lines.filter((l, i) => i > 0 && l < '2025-10-26');
-const tomorrow = lines.filter((l) => l.startsWith('2025-10-26'));
-const historyFile = writeFile(dir, 'history.csv', `${[header, ...history].join('\n')}\n`);
-const oneFile = writeFile(dir, 'one-file.csv', `${[header, ...history, ...tomorrow.map((l) => l.replace(/^([^,]*),[^,]*,/, '$1,,'))].join('\n')}\n`);
-// the drivers as a continental desk writes them: ;, decimal commas, local wall clock, columns in another order
-const driversFile = writeFile(dir, 'drivers-2025-10-26.csv', `${['timestamp;wind_forecast;load_forecast', ...tomorrow.map((l) => {
-  const [t, , load, wind] = l.split(',');
-  return [t.slice(0, 16).replace('T', ' '), wind.replace('.', ','), load.replace('.', ',')].join(';');
-})].join('\n')}\n`);
-const model = join(dir, 'linear.json');
+const { historyFile, oneFile, driversFile, model } = dailyFiles(dir);
 
 async function forecast(args: string[]) {
   const r = await runMain(['forecast', '--model', model, ...args, '--json']);
