@@ -1,8 +1,8 @@
-import { createModel, dayFrame, frameBefore, inputFrame, type Learner, type ModelOptions, type Series } from '../../../src/engine';
+import { createModel, dayFrame, frameBefore, inputFrame, type Learner, type Series } from '../../../src/engine';
+import { SMALL } from '../../support/small-learner';
 import { syntheticSeries } from '../../support/synthetic';
 
-/** Small networks so the blend and neural fits take a few seconds (no reference values: invented data). */
-export const SMALL: ModelOptions = { seed: 4, network: { hiddenLayers: [6], learningRate: 0.05, momentum: 0.5, iterations: 15, ensemble: 2, checkEvery: 5, patience: 2 } };
+export { SMALL };
 
 /** The model trains on the first 130 delivery days; tomorrow is day 130 (drivers given, price empty). */
 export const HISTORY_DAYS = 130;

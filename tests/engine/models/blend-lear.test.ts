@@ -1,19 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import {
   createModel, frameBefore, inputFrame, Learner, learnerFromStored, parseStoredModel, runBacktest, storedModelText, toStoredModel,
-  type ModelOptions, type Series,
+  type Series,
 } from '../../../src/engine';
+import { fitted, SMALL } from '../../support/small-learner';
 import { syntheticSeries } from '../../support/synthetic';
 
 // The blend's LEAR part (lear-part.ts) and the short histories of issue 11.
-const SMALL: ModelOptions = { seed: 4, network: { hiddenLayers: [6], learningRate: 0.05, momentum: 0.5, iterations: 15, ensemble: 2, checkEvery: 5, patience: 2 } };
 const series = syntheticSeries(140);
 
-function fitted(kind: string, s: Series): Learner {
-  const model = createModel(kind, SMALL) as Learner;
-  model.fit(inputFrame(s));
-  return model;
-}
 
 describe('the blend with a LEAR part', () => {
   const model = fitted('blend', series);

@@ -1,17 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { createModel, inputFrame, type Learner, type ModelOptions, type Series } from '../../../src/engine';
+import { inputFrame, type Series } from '../../../src/engine';
 import { trainingBlocks } from '../../../src/engine/models/blocks';
 import { scaleWindowFor } from '../../../src/engine/models/choose-setup';
+import { fitted, SMALL } from '../../support/small-learner';
 import { syntheticSeries } from '../../support/synthetic';
 
-const SMALL: ModelOptions = { seed: 4, network: { hiddenLayers: [6], learningRate: 0.05, momentum: 0.5, iterations: 15, ensemble: 2, checkEvery: 5, patience: 2 } };
 const series = syntheticSeries(160);
 
-function fitted(kind: string, s: Series): Learner {
-  const model = createModel(kind, SMALL) as Learner;
-  model.fit(inputFrame(s));
-  return model;
-}
 
 /** The series with every price of the last `days` local delivery days changed. */
 function newestDaysChanged(s: Series, days: number): Series {

@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import {
   createModel, frameBefore, inputFrame, Learner, learnerFromStored, parseStoredModel, runBacktest, storedModelText, toStoredModel,
-  type ModelOptions, type Series,
+  type Series,
 } from '../../../src/engine';
+import { SMALL } from '../../support/small-learner';
 import { syntheticSeries } from '../../support/synthetic';
 
-const SMALL: ModelOptions = { seed: 4, network: { hiddenLayers: [6], learningRate: 0.05, momentum: 0.5, iterations: 15, ensemble: 2, checkEvery: 5, patience: 2 } };
 const series = syntheticSeries(140);
 const testStart = '2025-05-01';
 
