@@ -1,3 +1,5 @@
+import { z } from '../schema-config';
+
 /**
  * Float arrays as base64 text (RFC 4648 §4) of their little-endian IEEE 754
  * bytes: exact, about a third the size of decimal JSON, and free of
@@ -8,6 +10,9 @@ const LOOKUP = new Int16Array(128).fill(-1);
 for (let i = 0; i < ALPHABET.length; i++) LOOKUP[ALPHABET.charCodeAt(i)] = i;
 
 export const BASE64 = /^[A-Za-z0-9+/]*={0,2}$/;
+
+/** The schema piece of a float array as base64 text, at most the model file's 2 MB (its length is checked when decoded). */
+export const Base64Floats = z.string().max(2 * 1024 * 1024).regex(BASE64, 'not base64 text');
 
 export function encodeFloats(values: ArrayLike<number>, bytes: 4 | 8): string {
   const buf = new ArrayBuffer(values.length * bytes);

@@ -1,7 +1,7 @@
 import { z } from '../schema-config';
 import { LEAR_LEVELS, learDesign, type LearLevel } from '../models/lear-features';
 import type { LearCalibration } from '../models/lear-calibrate';
-import { decodeFloats, encodeFloats, BASE64 } from './base64-floats';
+import { Base64Floats, decodeFloats, encodeFloats } from './base64-floats';
 
 /**
  * The blend's LEAR part as a model file keeps it: the input level (the
@@ -11,7 +11,7 @@ import { decodeFloats, encodeFloats, BASE64 } from './base64-floats';
  * floats (a relative change below 1e-7, far inside the model file's budget
  * of 1e-4 of the price range), the input scales in 8 bytes.
  */
-const Floats = z.string().max(2 * 1024 * 1024).regex(BASE64, 'not base64 text');
+const Floats = Base64Floats;
 const Finite = z.number().finite();
 
 export const StoredLearSchema = z.strictObject({

@@ -1,7 +1,7 @@
 import { z } from '../schema-config';
 import { ALL_FEATURE_GROUPS, type FeatureGroup } from '../features/feature-groups';
 import { LearnerSettingsSchema } from '../models/learner-settings';
-import { BASE64 } from './base64-floats';
+import { Base64Floats } from './base64-floats';
 import { StoredLearSchema } from './lear-file';
 import { PackedFloats } from './packed-floats';
 
@@ -28,7 +28,7 @@ export const NAME_RULE = 'letters, digits, spaces and _ . - ( ) [ ] % ° # + (at
 export const StoredName = z.string().min(1).max(64).regex(/^[\p{L}\p{N}_][\p{L}\p{N}_ .\-()[\]%°#+]*$/u, `names may hold ${NAME_RULE}`)
   .refine((s) => !FORBIDDEN.has(s), 'reserved name');
 const Name = StoredName;
-const Floats = z.string().max(MAX_MODEL_BYTES).regex(BASE64, 'not base64 text');
+const Floats = Base64Floats;
 const Packed = PackedFloats;
 const Finite = z.number().finite();
 const Day = z.string().regex(/^\d{4}-\d{2}-\d{2}$/);
