@@ -2,7 +2,7 @@ import { InputError } from '../errors';
 import { historyNeeded } from '../features/day-features';
 import { fromScaled, type LevelScale } from '../features/level-scale';
 import { frameBefore, targetDay, type DayFrame } from '../series/day-frame';
-import { addResiduals, bands, REPORTED_COVERAGES } from './bands';
+import { addResiduals, bands, REPORTED_COVERAGES, type Band } from './bands';
 import { mix3 } from './blend-weights';
 import { LEAR_REFRESH_DAYS, learOnAll, learPoint } from './lear-part';
 import { adaptCoverage, missedShare } from './adaptive-coverage';
@@ -90,14 +90,15 @@ export class Learner implements DayAheadModel {
     this.catchUpErrors(view, d);
     const parts = this.partsOf(f.x, f.scale, learPoint(state.lear, view));
     const point = this.combine(parts);
-    const [own, ...reported] = this.bandsAround(point, f.scale.scale);
+    const built = this.bandsAround(point, f.scale.scale);
+    const [own, ...reported] = built;
     const { lower, upper } = own;
     // a damaged or hand-edited model, or inputs far outside anything trained on, can overflow sinh
     const infinite = (v: number) => v === Infinity || v === -Infinity;
     if (!point.every(Number.isFinite) || lower.some(infinite) || upper.some(infinite)) {
       throw new InputError(`model ${this.name} gave a forecast for ${view.days[d].date} that is not a finite number; its inputs or the stored model are far out of range`);
     }
-    this.issued.set(d, { point, parts, scale: f.scale.scale });
+    this.issued.set(d, { point, parts, scale: f.scale.scale, bands: built });
     return { point, lower, upper, bands: reported };
   }
 
@@ -195,12 +196,18 @@ export class Learner implements DayAheadModel {
     return [this.settings.coverage, ...REPORTED_COVERAGES];
   }
 
-  /** Adaptive conformal step: each band's coverage moves by how many of the day's prices its band (as it stood) missed. */
+  /**
+   * Adaptive conformal step: each band's coverage moves by how many of the
+   * day's prices its band (as it stood) missed; an issued day's bands are
+   * those it was given, a caught-up day's are built from the pool as it
+   * stands (the same one: nothing joins the pool between a forecast and the
+   * catch-up of its day).
+   */
   private adaptBands(actual: ArrayLike<number>, issued: Issued): void {
     const state = this.fitted();
     const nominal = this.nominalCoverages();
     const current = state.bandCoverage ?? nominal;
-    const built = this.bandsAround(issued.point, issued.scale);
+    const built = issued.bands ?? this.bandsAround(issued.point, issued.scale);
     state.bandCoverage = nominal.map((c, i) => adaptCoverage(c, current[i], missedShare(actual, built[i].lower, built[i].upper)));
   }
 
@@ -272,7 +279,7 @@ export class Learner implements DayAheadModel {
 }
 
 type Parts = Omit<PartsDay, 'actual'>;
-interface Issued { point: Float64Array; parts: Parts; scale: number }
+interface Issued { point: Float64Array; parts: Parts; scale: number; bands?: Band[] }
 
 /** Index of the first day of `view` after `date`. */
 function firstDayAfter(view: DayFrame, date: string): number {
