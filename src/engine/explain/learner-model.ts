@@ -1,3 +1,4 @@
+import { InputError } from '../errors';
 import { groupColumns, type GroupColumns } from '../features/group-columns';
 import type { LevelScale } from '../features/level-scale';
 import type { Learner } from '../models/learner';
@@ -61,8 +62,9 @@ export function learnerModel(learner: Learner): GroupedModel<LearnerInputs> {
       if (!f || !lear) return f;
       try {
         return { ...f, lear: learInputs(lear, frameBefore(frame, d)) };
-      } catch {
-        return undefined; // an input LEAR needs is unknown
+      } catch (err) {
+        if (err instanceof InputError) return undefined; // an input LEAR needs is unknown
+        throw err;
       }
     },
     switched(d, r, fromD) {
