@@ -15,6 +15,7 @@ import { loadNetwork, trainNetwork, type NetworkJson } from './network';
 import { networkSamples, refreshNetworks } from './network-refresh';
 import { permutationImportance } from './permutation-importance';
 import { priceRangeOf } from './price-range';
+import { RECENT_DAYS, type PartsDay } from './recent-weights';
 import { fitStandardiser, standardise, type Standardiser } from './standardiser';
 import { FeatureCache, type TrainingDay } from './training-days';
 import { fitUnitRange, fromUnit, type UnitRange } from './unit-range';
@@ -36,7 +37,9 @@ const MIN_FIT_DAYS = 10;
  * importance and the first errors of the bands; then the linear part is
  * refitted on every day and the networks are warm-started on every day.
  */
-export function fitLearner(view: DayFrame, s: LearnerSettings, progress?: Progress): { state: LearnerState; cache: FeatureCache; sums: MemberSums[] } {
+export function fitLearner(
+  view: DayFrame, s: LearnerSettings, progress?: Progress,
+): { state: LearnerState; cache: FeatureCache; sums: MemberSums[]; recent: PartsDay[] } {
   if (view.price.length < MIN_HISTORY_DAYS) {
     throw new InputError(`model ${s.kind} needs at least ${MIN_HISTORY_DAYS} days of price history; the data has ${view.price.length}`);
   }
@@ -131,7 +134,11 @@ export function fitLearner(view: DayFrame, s: LearnerSettings, progress?: Progre
     trainedTo,
     residualsThrough: trainedTo,
   };
-  return { state, cache, sums: final.sums };
+  // the newest holdout days are the first out-of-sample days the rolling weights (recent-weights.ts) learn from
+  const recent = holdout.map((d, i): PartsDay => ({
+    actual: view.price[d.day], linear: linHoldout[i], ...(nnHoldout.length ? { neural: nnHoldout[i] } : {}), ...(learHoldout.length ? { lear: learHoldout[i] } : {}),
+  })).slice(-RECENT_DAYS);
+  return { state, cache, sums: final.sums, recent };
 }
 
 function trainEnsemble(

@@ -74,8 +74,9 @@ export class Learner implements DayAheadModel {
   }
 
   fit(view: DayFrame, progress?: Progress): void {
-    const { state, cache, sums } = fitLearner(view, this.settings, progress);
+    const { state, cache, sums, recent } = fitLearner(view, this.settings, progress);
     this.adopt(state, cache, sums);
+    this.recent = recent;
     this.lastWarm = view.price.length;
     this.lastLear = view.price.length;
   }

@@ -1,7 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { inputFrame, type Series } from '../../../src/engine';
+import { createModel, inputFrame, type Learner, type Series } from '../../../src/engine';
 import { trainingBlocks } from '../../../src/engine/models/blocks';
+import { meanAbsError } from '../../../src/engine/models/blend-weights';
 import { scaleWindowFor } from '../../../src/engine/models/choose-setup';
+import { fitLearner } from '../../../src/engine/models/fit-learner';
+import { RECENT_DAYS } from '../../../src/engine/models/recent-weights';
 import { fitted, SMALL } from '../../support/small-learner';
 import { syntheticSeries } from '../../support/synthetic';
 
@@ -41,5 +44,17 @@ describe('fitLearner: the holdout block takes part in no choice', () => {
     const state = fitted('linear', series).state!;
     expect(state.tuning.mae).toBeLessThanOrEqual(state.tuning.maeNaiveWeek);
     expect(state.tuning.days).toBe(trainingBlocks(160 - scaleWindowFor(56, 160)).tuning);
+  });
+
+  it('the rolling weights start from the newest holdout days: their parts are the holdout forecasts behind the reported scores', () => {
+    const { settings } = createModel('blend', SMALL) as Learner;
+    const { state, recent } = fitLearner(inputFrame(series), settings);
+    const frame = inputFrame(series);
+    const holdoutDays = frame.price.slice(-state.holdout.days);
+    expect(state.holdout.days).toBeLessThanOrEqual(RECENT_DAYS);
+    expect(recent.map((d) => Array.from(d.actual))).toEqual(holdoutDays.map((p) => Array.from(p)));
+    // the same forecasts the holdout block was scored with, so they are out-of-sample (the test above)
+    expect(meanAbsError(recent.map((d) => d.actual), recent.map((d) => d.linear))).toBeCloseTo(state.holdout.maeLinear, 12);
+    expect(meanAbsError(recent.map((d) => d.actual), recent.map((d) => d.neural!))).toBeCloseTo(state.holdout.maeNeural, 12);
   });
 });
