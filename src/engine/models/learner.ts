@@ -77,6 +77,11 @@ export class Learner implements DayAheadModel {
     const { state, cache, sums, recent } = fitLearner(view, this.settings, progress);
     this.adopt(state, cache, sums);
     this.recent = recent;
+    const tuned = { neural: state.neuralWeight, lear: state.learWeight };
+    if (this.followRecent()) {
+      const pct = (w: number) => `${Math.round(100 * w)} %`;
+      state.notes.push(`blend weights ${pct(tuned.neural)} neural, ${pct(tuned.lear)} LEAR from the tuning block moved to ${pct(state.neuralWeight)} neural, ${pct(state.learWeight)} LEAR: they did better on the newest ${recent.length} holdout days (the validation MAE is that of the tuning block's weights)`);
+    }
     this.lastWarm = view.price.length;
     this.lastLear = view.price.length;
   }
@@ -179,12 +184,18 @@ export class Learner implements DayAheadModel {
       addResiduals(state.residuals, view.price[k], issued.point, issued.scale);
       rememberDay(this.recent, { actual: view.price[k], ...issued.parts });
     }
-    if (this.settings.kind === 'blend') {
-      const w = recentWeights(this.recent, { neural: state.neuralWeight, lear: state.learWeight });
-      if (w) { state.neuralWeight = w.neural; state.learWeight = w.lear; }
-    }
+    this.followRecent();
     if (d > 0 && view.days[d - 1].date > state.residualsThrough) state.residualsThrough = view.days[d - 1].date;
     for (const day of this.issued.keys()) if (day < d) this.issued.delete(day);
+  }
+
+  /** A blend takes the weights of its parts' recent errors when they beat the current ones (recent-weights.ts); true when it did. */
+  private followRecent(): boolean {
+    const state = this.fitted();
+    if (this.settings.kind !== 'blend') return false;
+    const w = recentWeights(this.recent, { neural: state.neuralWeight, lear: state.learWeight });
+    if (w) { state.neuralWeight = w.neural; state.learWeight = w.lear; }
+    return w !== undefined;
   }
 
   /** The bands around a point forecast, own coverage first, then REPORTED_COVERAGES, each at its adapted coverage. */

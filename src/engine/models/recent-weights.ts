@@ -13,9 +13,10 @@ import { bestMix3, meanAbsError, mix3 } from './blend-weights';
  * Nowotarski, Raviv, Trück & Weron 2014, Energy Economics 46); here it lets
  * the blend lean on the part that copes best after a level shift.
  * The first remembered days are the newest holdout days of the fit (their
- * forecasts came from models fitted before them), so a shift that starts
- * just before the last training day counts from the first forecast on
- * instead of after two weeks of it (npm run bench, 2026-12-03: Cindervale
+ * forecasts came from models fitted before them) and the fit applies the
+ * rule to them, so a trained model, also a stored one, carries its newest
+ * days' weights and a shift that starts before the last training day
+ * counts from the first forecast on instead of after two weeks of it (npm run bench, 2026-12-03: Cindervale
  * blend 15.13 → 14.00, the calm markets unchanged).
  */
 export const RECENT_DAYS = 28;

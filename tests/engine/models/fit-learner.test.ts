@@ -4,7 +4,7 @@ import { trainingBlocks } from '../../../src/engine/models/blocks';
 import { meanAbsError } from '../../../src/engine/models/blend-weights';
 import { scaleWindowFor } from '../../../src/engine/models/choose-setup';
 import { fitLearner } from '../../../src/engine/models/fit-learner';
-import { RECENT_DAYS } from '../../../src/engine/models/recent-weights';
+import { RECENT_DAYS, recentWeights } from '../../../src/engine/models/recent-weights';
 import { fitted, SMALL } from '../../support/small-learner';
 import { syntheticSeries } from '../../support/synthetic';
 
@@ -19,13 +19,16 @@ function newestDaysChanged(s: Series, days: number): Series {
 }
 
 describe('fitLearner: the holdout block takes part in no choice', () => {
+  // fitLearner's own state: the tuning block's choices, before the blend's rolling weights take in the holdout days (next tests)
+  const fitOnly = (kind: string, s: Series) => fitLearner(inputFrame(s), (createModel(kind, SMALL) as Learner).settings).state;
+
   it.each(['linear', 'blend'])('%s: changing the holdout days\' prices leaves every choice and the tuning score as they were', (kind) => {
-    const a = fitted(kind, series).state!;
+    const a = fitOnly(kind, series);
     const holdout = a.holdout.days;
     expect(holdout).toBe(trainingBlocks(160 - scaleWindowFor(56, 160)).holdout);
-    const b = fitted(kind, newestDaysChanged(series, holdout)).state!;
+    const b = fitOnly(kind, newestDaysChanged(series, holdout));
     expect(b.linear.map((l) => l.lambda)).toEqual(a.linear.map((l) => l.lambda));
-    expect(b.neuralWeight).toBe(a.neuralWeight);
+    expect([b.neuralWeight, b.learWeight]).toEqual([a.neuralWeight, a.learWeight]);
     expect(b.tuning).toEqual(a.tuning);
     // and the change does reach what is scored on the holdout, so the check can fail
     expect(b.holdout.mae).not.toBe(a.holdout.mae);
@@ -56,5 +59,14 @@ describe('fitLearner: the holdout block takes part in no choice', () => {
     // the same forecasts the holdout block was scored with, so they are out-of-sample (the test above)
     expect(meanAbsError(recent.map((d) => d.actual), recent.map((d) => d.linear))).toBeCloseTo(state.holdout.maeLinear, 12);
     expect(meanAbsError(recent.map((d) => d.actual), recent.map((d) => d.neural!))).toBeCloseTo(state.holdout.maeNeural, 12);
+  });
+
+  it('a fitted blend carries the weights the rolling rule takes from those days, with a note when they moved', () => {
+    const { settings } = createModel('blend', SMALL) as Learner;
+    const { state, recent } = fitLearner(inputFrame(series), settings);
+    const learner = fitted('blend', series).state!;
+    const moved = recentWeights(recent, { neural: state.neuralWeight, lear: state.learWeight });
+    expect({ neural: learner.neuralWeight, lear: learner.learWeight }).toEqual(moved ?? { neural: state.neuralWeight, lear: state.learWeight });
+    expect(learner.notes.some((n) => n.startsWith('blend weights'))).toBe(moved !== undefined);
   });
 });
