@@ -15,7 +15,7 @@ import { loadNetwork, trainNetwork, type NetworkJson } from './network';
 import { networkSamples, refreshNetworks } from './network-refresh';
 import { permutationImportance } from './permutation-importance';
 import { priceRangeOf } from './price-range';
-import { RECENT_DAYS, type PartsDay } from './recent-weights';
+import { rememberDay, type PartsDay } from './recent-weights';
 import { fitStandardiser, standardise, type Standardiser } from './standardiser';
 import { FeatureCache, type TrainingDay } from './training-days';
 import { fitUnitRange, fromUnit, type UnitRange } from './unit-range';
@@ -135,9 +135,10 @@ export function fitLearner(
     residualsThrough: trainedTo,
   };
   // the newest holdout days are the first out-of-sample days the rolling weights (recent-weights.ts) learn from
-  const recent = holdout.map((d, i): PartsDay => ({
+  const recent: PartsDay[] = [];
+  holdout.forEach((d, i) => rememberDay(recent, {
     actual: view.price[d.day], linear: linHoldout[i], ...(nnHoldout.length ? { neural: nnHoldout[i] } : {}), ...(learHoldout.length ? { lear: learHoldout[i] } : {}),
-  })).slice(-RECENT_DAYS);
+  }));
   return { state, cache, sums: final.sums, recent };
 }
 
