@@ -18,15 +18,16 @@ function newestDaysChanged(s: Series, days: number): Series {
   return { ...s, price: s.price.map((p, i) => (i >= cut ? p * 1.3 + 7 : p)) };
 }
 
+/** fitLearner's own result: the tuning block's choices, before the blend's rolling weights take in the holdout days (Learner.fit). */
+const fitOnly = (kind: string, s: Series) => fitLearner(inputFrame(s), (createModel(kind, SMALL) as Learner).settings);
+
 describe('fitLearner: the holdout block takes part in no choice', () => {
-  // fitLearner's own state: the tuning block's choices, before the blend's rolling weights take in the holdout days (next tests)
-  const fitOnly = (kind: string, s: Series) => fitLearner(inputFrame(s), (createModel(kind, SMALL) as Learner).settings).state;
 
   it.each(['linear', 'blend'])('%s: changing the holdout days\' prices leaves every choice and the tuning score as they were', (kind) => {
-    const a = fitOnly(kind, series);
+    const a = fitOnly(kind, series).state;
     const holdout = a.holdout.days;
     expect(holdout).toBe(trainingBlocks(160 - scaleWindowFor(56, 160)).holdout);
-    const b = fitOnly(kind, newestDaysChanged(series, holdout));
+    const b = fitOnly(kind, newestDaysChanged(series, holdout)).state;
     expect(b.linear.map((l) => l.lambda)).toEqual(a.linear.map((l) => l.lambda));
     expect([b.neuralWeight, b.learWeight]).toEqual([a.neuralWeight, a.learWeight]);
     expect(b.tuning).toEqual(a.tuning);
@@ -50,10 +51,8 @@ describe('fitLearner: the holdout block takes part in no choice', () => {
   });
 
   it('the rolling weights start from the newest holdout days: their parts are the holdout forecasts behind the reported scores', () => {
-    const { settings } = createModel('blend', SMALL) as Learner;
-    const { state, recent } = fitLearner(inputFrame(series), settings);
-    const frame = inputFrame(series);
-    const holdoutDays = frame.price.slice(-state.holdout.days);
+    const { state, recent } = fitOnly('blend', series);
+    const holdoutDays = inputFrame(series).price.slice(-state.holdout.days);
     expect(state.holdout.days).toBeLessThanOrEqual(RECENT_DAYS);
     expect(recent.map((d) => Array.from(d.actual))).toEqual(holdoutDays.map((p) => Array.from(p)));
     // the same forecasts the holdout block was scored with, so they are out-of-sample (the test above)
@@ -61,12 +60,20 @@ describe('fitLearner: the holdout block takes part in no choice', () => {
     expect(meanAbsError(recent.map((d) => d.actual), recent.map((d) => d.neural!))).toBeCloseTo(state.holdout.maeNeural, 12);
   });
 
-  it('a fitted blend carries the weights the rolling rule takes from those days, with a note when they moved', () => {
-    const { settings } = createModel('blend', SMALL) as Learner;
-    const { state, recent } = fitLearner(inputFrame(series), settings);
-    const learner = fitted('blend', series).state!;
+  it('a fitted blend carries the weights the rolling rule takes from those days, with a note, when they moved', () => {
+    // the level jumps in the holdout days (x 1.3 + 7): the parts cope differently, so the rule moves the weights
+    const shifted = newestDaysChanged(series, fitOnly('blend', series).state.holdout.days);
+    const { state, recent } = fitOnly('blend', shifted);
     const moved = recentWeights(recent, { neural: state.neuralWeight, lear: state.learWeight });
-    expect({ neural: learner.neuralWeight, lear: learner.learWeight }).toEqual(moved ?? { neural: state.neuralWeight, lear: state.learWeight });
-    expect(learner.notes.some((n) => n.startsWith('blend weights'))).toBe(moved !== undefined);
+    expect(moved).toBeDefined();
+    const learner = fitted('blend', shifted).state!;
+    expect({ neural: learner.neuralWeight, lear: learner.learWeight }).toEqual(moved);
+    expect(learner.notes.filter((n) => n.startsWith('blend weights'))).toHaveLength(1);
+    // without the jump the rule keeps the tuning block's weights, and there is no note
+    const calm = fitOnly('blend', series);
+    expect(recentWeights(calm.recent, { neural: calm.state.neuralWeight, lear: calm.state.learWeight })).toBeUndefined();
+    const kept = fitted('blend', series).state!;
+    expect([kept.neuralWeight, kept.learWeight]).toEqual([calm.state.neuralWeight, calm.state.learWeight]);
+    expect(kept.notes.some((n) => n.startsWith('blend weights'))).toBe(false);
   });
 });
