@@ -9,6 +9,9 @@ import {
 } from '../src/engine';
 
 const TEST_DAYS = Number(process.env.BENCH_TEST_DAYS ?? 91);
+// e.g. BENCH_TEST_START=2026-05-10 BENCH_TEST_END=2026-08-08 for a span before a market's end (default: its last TEST_DAYS days)
+const TEST_START = process.env.BENCH_TEST_START;
+const TEST_END = process.env.BENCH_TEST_END;
 const MODELS = (process.env.BENCH_MODELS ?? 'blend,neural,linear,lear,weekday-rule,naive-week').split(',');
 const MARKETS = (process.env.BENCH_MARKETS ?? 'demo,solar,shift').split(',');
 /** history before the test span: 'full', or a number of days (6 weeks = 42) */
@@ -25,10 +28,10 @@ interface Row {
 function bench(spec: MarketSpec, history: string): Row[] {
   const { rows: all, oracle } = generateMarketWithOracle(spec, 1);
   const dates = [...new Set(all.map((r) => r.timestamp.slice(0, 10)))];
-  const testStart = dates[dates.length - TEST_DAYS];
-  const firstDay = history === 'full' ? dates[0] : dates[dates.length - TEST_DAYS - Number(history)];
+  const testStart = TEST_START ?? dates[dates.length - TEST_DAYS];
+  const firstDay = history === 'full' ? dates[0] : dates[dates.indexOf(testStart) - Number(history)];
   const kept = all.map((r, i) => ({ r, i })).filter(({ r }) => r.timestamp.slice(0, 10) >= firstDay);
-  const test = kept.filter(({ r }) => r.timestamp.slice(0, 10) >= testStart);
+  const test = kept.filter(({ r }) => r.timestamp.slice(0, 10) >= testStart && (!TEST_END || r.timestamp.slice(0, 10) <= TEST_END));
   const floor = test.reduce((s, { r, i }) => s + Math.abs(r.price - oracle[i]), 0) / test.length;
   const { series } = buildSeries(parseCsv(toCsv(kept.map(({ r }) => r)), spec.name), { zone: spec.zone });
   const frame = inputFrame(series);
@@ -43,7 +46,7 @@ function bench(spec: MarketSpec, history: string): Row[] {
     model.predict = (view) => { const t = performance.now(); const f = predict(view); predictMs += performance.now() - t; predictions++; return f; };
     let summary: BacktestSummary;
     try {
-      summary = runBacktest(model, frame, series, { testStart, retrainEvery: model.defaultRetrainEvery ?? 0 }).summary;
+      summary = runBacktest(model, frame, series, { testStart, testEnd: TEST_END, retrainEvery: model.defaultRetrainEvery ?? 0 }).summary;
     } catch (err) {
       process.stderr.write(`${spec.name} ${history} ${name}: ${(err as Error).message}\n`);
       continue;
